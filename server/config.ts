@@ -29,7 +29,26 @@ const envSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   RATE_LIMIT_AUTH_MAX: z.coerce.number().int().min(1).default(20),
   DIST_DIR: z.string().default('dist'),
+  /** Object storage for coil attachments. Empty endpoint = the provider's default; FAKE_SERVICES=1 uses the fake. */
+  S3_ENDPOINT: z
+    .string()
+    .optional()
+    .transform((v) => v || undefined)
+    .refine((v) => v === undefined || /^https?:\/\/[^/]+/.test(v), 'S3_ENDPOINT must look like http(s)://host[:port]'),
+  S3_BUCKET: z.string().min(3).default('tubeloom-attachments'),
+  S3_ACCESS_KEY_ID: z.string().min(1).default('S3RVER'),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).default('S3RVER'),
+  S3_REGION: z.string().min(1).default('us-east-1'),
 });
+
+/** Where attachments are stored (the defaults fit the local fake S3). */
+export interface S3Settings {
+  endpoint: string | undefined;
+  bucket: string;
+  accessKeyId: string;
+  secretAccessKey: string;
+  region: string;
+}
 
 export interface Config {
   nodeEnv: 'development' | 'production' | 'test';
@@ -46,9 +65,11 @@ export interface Config {
   rateLimitAuthMax: number;
   /** Absolute path of the Expo web export. */
   distDir: string;
+  /** Replaced at start-up by the fake's address when FAKE_SERVICES=1 (server/index.ts). */
+  s3: S3Settings;
 }
 
-export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
   const parsed = envSchema.safeParse(env);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
@@ -69,5 +90,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     logLevel: e.LOG_LEVEL,
     rateLimitAuthMax: e.RATE_LIMIT_AUTH_MAX,
     distDir: path.resolve(e.DIST_DIR),
+    s3: {
+      endpoint: e.S3_ENDPOINT,
+      bucket: e.S3_BUCKET,
+      accessKeyId: e.S3_ACCESS_KEY_ID,
+      secretAccessKey: e.S3_SECRET_ACCESS_KEY,
+      region: e.S3_REGION,
+    },
   };
 }

@@ -37,6 +37,7 @@ export const colors = {
   background: palette.sand50,
   surface: palette.white,
   surfaceMuted: palette.sand100,
+  surfaceStripe: '#FBFAF7',
   border: palette.sand200,
   borderStrong: palette.sand300,
   text: palette.slate900,

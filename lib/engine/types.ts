@@ -92,6 +92,10 @@ export interface CircuitResult {
   pressureDrop_Pa?: number;
   leavingTemperature_C?: number;
   capacity_W?: number;
+  /** Flow fraction of design below which this circuit's lowest Re falls under 4000 (1 when already below). */
+  transitionalBelowFlowFraction?: number;
+  /** Flow fraction of design below which this circuit's lowest Re falls under 2300 (1 when already below). */
+  laminarBelowFlowFraction?: number;
 }
 
 export interface Totals {

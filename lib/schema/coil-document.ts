@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import type * as Engine from '@/lib/engine/types';
+import { freezingPoint_C } from '@/lib/engine/properties/fluid';
 
 const bounded = (what: string, unit: string, min: number, max: number) =>
   z
@@ -102,11 +103,28 @@ export const fluidKindSchema = z.enum(['water', 'ethylene-glycol', 'propylene-gl
 });
 export type FluidKind = z.infer<typeof fluidKindSchema>;
 
+/** Highest entering water temperature accepted, degC (pressurised hot water; the property range is wider). */
+export const WATER_MAX_INLET_C = 120;
+/** Lowest entering water temperature accepted, degC (plain water must stay clear of freezing). */
+export const WATER_MIN_INLET_C = 1;
+/** Highest entering glycol temperature, degC: the upper limit of the Melinder (2010) fits (ENGINEERING.md 3.2). */
+export const GLYCOL_MAX_INLET_C = 100;
+
+/** Freezing point of a glycol solution (Melinder 2010), or null when it cannot be evaluated for these inputs. */
+function glycolFreezingPoint_C(kind: Engine.FluidKind, fraction: number): number | null {
+  try {
+    const t = freezingPoint_C({ kind, glycolMassFraction: fraction });
+    return Number.isFinite(t) ? t : null;
+  } catch {
+    return null;
+  }
+}
+
 export const fluidSchema = z
   .object({
     kind: fluidKindSchema,
     glycolMassFraction: bounded('glycol mass fraction', '(0 to 0.6)', 0, 0.6),
-    inletTemperature_C: bounded('entering fluid temperature', '°C', -30, 120),
+    inletTemperature_C: bounded('entering fluid temperature', '°C', -40, WATER_MAX_INLET_C),
     massFlow_kg_s: bounded('fluid mass flow', 'kg/s', 0.001, 100),
   })
   .superRefine((f, ctx) => {
@@ -116,8 +134,25 @@ export const fluidSchema = z
     if (f.kind !== 'water' && f.glycolMassFraction < 0.05) {
       ctx.addIssue({ code: 'custom', path: ['glycolMassFraction'], message: 'glycol solutions need a mass fraction of at least 0.05 (use water below that)' });
     }
-    if (f.kind === 'water' && f.inletTemperature_C < 1) {
-      ctx.addIssue({ code: 'custom', path: ['inletTemperature_C'], message: 'plain water must enter above 1 °C (use a glycol solution below that)' });
+    if (f.kind === 'water' && f.inletTemperature_C < WATER_MIN_INLET_C) {
+      ctx.addIssue({ code: 'custom', path: ['inletTemperature_C'], message: `plain water must enter at ${WATER_MIN_INLET_C} °C or warmer (use a glycol solution below that)` });
+    }
+    if (f.kind !== 'water') {
+      const name = f.kind === 'ethylene-glycol' ? 'ethylene glycol' : 'propylene glycol';
+      const percent = Math.round(f.glycolMassFraction * 1000) / 10;
+      if (f.inletTemperature_C > GLYCOL_MAX_INLET_C) {
+        ctx.addIssue({ code: 'custom', path: ['inletTemperature_C'], message: `glycol solutions must enter at ${GLYCOL_MAX_INLET_C} °C or cooler (the limit of the property data)` });
+      }
+      const freeze = glycolFreezingPoint_C(f.kind, f.glycolMassFraction);
+      // Without a freezing point (fraction out of range, reported above) fall back to the -30 degC floor.
+      const floor = freeze ?? -30;
+      if (f.inletTemperature_C <= floor) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['inletTemperature_C'],
+          message: `${percent} % ${name} freezes at ${floor.toFixed(1)} °C; the entering temperature must be above that`,
+        });
+      }
     }
   });
 export type Fluid = z.infer<typeof fluidSchema>;

@@ -50,6 +50,8 @@ export const circuitResultSchema = z.object({
   pressureDrop_Pa: z.number().optional(),
   leavingTemperature_C: z.number().optional(),
   capacity_W: z.number().optional(),
+  transitionalBelowFlowFraction: z.number().optional(),
+  laminarBelowFlowFraction: z.number().optional(),
 });
 export type CircuitResult = z.infer<typeof circuitResultSchema>;
 

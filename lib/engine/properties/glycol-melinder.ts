@@ -182,19 +182,35 @@ export interface GlycolProperties {
  * μ 2.166449 mPa s.
  */
 export function glycolPropertiesMelinder2010(kind: GlycolKind, massFraction: number, temperature_C: number): GlycolProperties {
+  return glycolPropertiesMelinder2010Into(kind, massFraction, temperature_C, {
+    density_kg_m3: 0,
+    specificHeat_J_kgK: 0,
+    conductivity_W_mK: 0,
+    viscosity_Pa_s: 0,
+  });
+}
+
+/** Same as {@link glycolPropertiesMelinder2010}, written into `out` (no allocation; for the solver's hot path). */
+export function glycolPropertiesMelinder2010Into<T extends GlycolProperties>(
+  kind: GlycolKind,
+  massFraction: number,
+  temperature_C: number,
+  out: T,
+): T {
   const tf = freezingPointMelinder2010_C(kind, massFraction);
   if (!(temperature_C >= tf)) {
-    throw new RangeError(`${kind} at ${(massFraction * 100).toFixed(0)} % freezes at ${tf.toFixed(1)} °C (got ${temperature_C} °C)`);
+    throw new RangeError(
+      `${kind} at ${(massFraction * 100).toFixed(0)} % is valid only above its freezing point ${tf.toFixed(1)} °C (got ${temperature_C} °C)`,
+    );
   }
   if (!(temperature_C <= MELINDER_MAX_TEMPERATURE_C)) {
     throw new RangeError(`glycol properties are valid up to ${MELINDER_MAX_TEMPERATURE_C} °C (got ${temperature_C} °C)`);
   }
   const set = setFor(kind);
   fillScratch(set, massFraction * 100, temperature_C);
-  return {
-    density_kg_m3: evaluate(set.rho),
-    specificHeat_J_kgK: evaluate(set.cp),
-    conductivity_W_mK: evaluate(set.k),
-    viscosity_Pa_s: 1e-3 * Math.exp(evaluate(set.lnMu)),
-  };
+  out.density_kg_m3 = evaluate(set.rho);
+  out.specificHeat_J_kgK = evaluate(set.cp);
+  out.conductivity_W_mK = evaluate(set.k);
+  out.viscosity_Pa_s = 1e-3 * Math.exp(evaluate(set.lnMu));
+  return out;
 }

@@ -1,0 +1,231 @@
+/**
+ * The circuit editor: toolbar, the tube sheet in a pan/zoom viewport, the temperature legend and the tube read-out.
+ * Results come in as props (the workspace fetches them); the editor only draws and dispatches commands.
+ */
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { Platform, StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
+import { colors, space, type } from '@/components/ui/theme';
+import { Sheet } from '@/components/ui/sheet';
+import type { SolveResult, TubeRef } from '@/lib/engine/types';
+import type { Topology } from '@/lib/engine/topology';
+import { sheetAnalysis, tubeTemperatures } from './analysis';
+import { viridis } from './colormap';
+import { buildDrawing, buildSheetLayout, tubeKey } from './render-model';
+import { shortcutFor, shortcutTable } from './shortcuts';
+import type { EditorStore } from './store';
+import { EditorToolbar } from './toolbar';
+import { PX_PER_MM, TubeSheet } from './tube-sheet';
+import { useEditor, useView } from './use-editor';
+import { useSheetGestures } from './use-sheet-gestures';
+import { createViewStore, fitView } from './view-store';
+
+export interface CircuitEditorProps {
+  store: EditorStore;
+  topology: Topology;
+  /** The solve result of the drawing as it is now, or null (none yet, stale, or invalid). */
+  result: SolveResult | null;
+  formatTemperature: (celsius: number) => string;
+  /** Keyboard shortcuts are offered on wide screens. */
+  keyboard: boolean;
+}
+
+export function CircuitEditor({ store, topology, result, formatTemperature, keyboard }: CircuitEditorProps) {
+  const view = useMemo(() => createViewStore(), []);
+  const geometry = useEditor(store, (s) => s.document.geometry);
+  const circuiting = useEditor(store, (s) => s.document.circuiting);
+  const session = useEditor(store, (s) => s.session);
+  const canUndo = useEditor(store, (s) => s.past.length > 0);
+  const canRedo = useEditor(store, (s) => s.future.length > 0);
+  const { zoom, panX, panY, dragTo } = useView(view, (s) => s);
+  const [dragFrom, setDragFrom] = useState<TubeRef | null>(null);
+  const [temperatureOn, setTemperatureOn] = useState(false);
+  const [helpOpen, setHelpOpen] = useState(false);
+  const viewportRef = useRef<View>(null);
+  const viewportSize = useRef({ w: 0, h: 0 });
+
+  const layout = useMemo(() => buildSheetLayout(geometry), [geometry]);
+  const temperatures = useMemo(() => tubeTemperatures(result), [result]);
+  const analysis = useMemo(() => sheetAnalysis(topology, result), [topology, result]);
+  const drawing = useMemo(
+    () => buildDrawing(layout, circuiting, analysis, { face: session.face, selection: session.selection, temperatures: temperatureOn ? temperatures : null }),
+    [layout, circuiting, analysis, session.face, session.selection, temperatureOn, temperatures],
+  );
+
+  const fit = useCallback(() => {
+    const { w, h } = viewportSize.current;
+    if (w > 0 && h > 0) view.getState().setView(fitView(layout.width * PX_PER_MM, layout.height * PX_PER_MM, w, h));
+  }, [layout, view]);
+  useEffect(fit, [fit]); // a new geometry re-fits
+
+  const onLayout = (e: LayoutChangeEvent) => {
+    const { width, height } = e.nativeEvent.layout;
+    const first = viewportSize.current.w === 0;
+    viewportSize.current = { w: width, h: height };
+    if (first) fit();
+  };
+
+  const gestures = useSheetGestures(store, view, layout, viewportRef, setDragFrom);
+
+  useEffect(() => {
+    if (!keyboard || Platform.OS !== 'web' || typeof window === 'undefined') return;
+    const onKey = (e: KeyboardEvent) => {
+      const target = e.target as HTMLElement | null;
+      if (target && (target.tagName === 'INPUT' || target.tagName === 'TEXTAREA' || target.isContentEditable)) return;
+      const action = shortcutFor(e);
+      if (!action) return;
+      e.preventDefault();
+      const s = store.getState();
+      switch (action.kind) {
+        case 'tool':
+          s.setTool(action.tool);
+          break;
+        case 'switch-face':
+          s.setFace(s.session.face === 'connection' ? 'opposite' : 'connection');
+          break;
+        case 'overlay-faces':
+          s.setFace(s.session.face === 'both' ? 'connection' : 'both');
+          break;
+        case 'temperature':
+          setTemperatureOn((on) => !on);
+          break;
+        case 'fit':
+          fit();
+          break;
+        case 'undo':
+          s.undo();
+          break;
+        case 'redo':
+          s.redo();
+          break;
+        case 'cancel':
+          gestures.cancel();
+          break;
+        case 'help':
+          setHelpOpen(true);
+          break;
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [keyboard, store, fit, gestures]);
+
+  const infoTube = session.selection?.kind === 'tube' ? session.selection.tube : session.pendingTube;
+  const showTemperature = temperatureOn && drawing.temperatureRange !== null;
+
+  return (
+    <View style={styles.root} testID="circuit-editor">
+      <EditorToolbar
+        tool={session.tool}
+        face={session.face}
+        canUndo={canUndo}
+        canRedo={canRedo}
+        temperature={showTemperature}
+        temperatureAvailable={temperatures !== null}
+        onTool={(t) => store.getState().setTool(t)}
+        onFace={(f) => store.getState().setFace(f)}
+        onUndo={() => store.getState().undo()}
+        onRedo={() => store.getState().redo()}
+        onFit={fit}
+        onTemperature={() => setTemperatureOn((on) => !on)}
+        onHelp={keyboard ? () => setHelpOpen(true) : undefined}
+      />
+      <View
+        ref={viewportRef}
+        style={styles.viewport}
+        onLayout={onLayout}
+        testID="sheet-viewport"
+        {...({
+          onPointerDown: gestures.onPointerDown,
+          onPointerMove: gestures.onPointerMove,
+          onPointerUp: gestures.onPointerUp,
+          onPointerCancel: gestures.onPointerCancel,
+        } as object)}
+      >
+        <View style={[styles.wrapper, { transform: [{ translateX: panX }, { translateY: panY }, { scale: zoom }] }]}>
+          <TubeSheet layout={layout} drawing={drawing} pendingTube={session.pendingTube} dragFrom={dragFrom} dragTo={dragTo} />
+        </View>
+        <Text style={[type.caption, styles.faceTag]} pointerEvents="none" testID="face-shown">
+          {session.face === 'connection' ? 'Connection end' : session.face === 'opposite' ? 'Opposite end' : 'Both ends (opposite end faint)'}
+        </Text>
+        {showTemperature && drawing.temperatureRange ? (
+          <TemperatureLegend min={drawing.temperatureRange.min} max={drawing.temperatureRange.max} format={formatTemperature} />
+        ) : null}
+      </View>
+      <TubeReadout tube={infoTube} drawing={drawing} temperatures={temperatures} format={formatTemperature} />
+      {keyboard ? (
+        <Sheet open={helpOpen} title="Keyboard shortcuts" onClose={() => setHelpOpen(false)} testID="shortcuts-sheet">
+          {shortcutTable.map((s) => (
+            <View key={s.keys} style={styles.keyRow}>
+              <Text style={[type.number, styles.keyCell]}>{s.keys}</Text>
+              <Text style={[type.small, styles.keyWhat]}>{s.what}</Text>
+            </View>
+          ))}
+        </Sheet>
+      ) : null}
+    </View>
+  );
+}
+
+function TubeReadout({
+  tube,
+  drawing,
+  temperatures,
+  format,
+}: {
+  tube: TubeRef | null;
+  drawing: ReturnType<typeof buildDrawing>;
+  temperatures: ReturnType<typeof tubeTemperatures>;
+  format: (c: number) => string;
+}) {
+  if (!tube) {
+    return (
+      <Text style={[type.caption, styles.readout]} testID="tube-readout">
+        Tap a tube with Select to see its circuit and water temperatures.
+      </Text>
+    );
+  }
+  const key = tubeKey(tube);
+  const place = drawing.place.get(key);
+  const t = temperatures?.get(key);
+  const parts = [`Row ${tube.row}, tube ${tube.tube}`];
+  parts.push(place ? `circuit ${place.circuit}, pass ${place.pass}` : 'not in a complete circuit');
+  if (t?.waterIn_C !== undefined && t.waterOut_C !== undefined) parts.push(`water in ${format(t.waterIn_C)}, out ${format(t.waterOut_C)}`);
+  return (
+    <Text style={[type.small, styles.readout]} testID="tube-readout" accessibilityLiveRegion="polite">
+      {parts.join(' · ')}
+    </Text>
+  );
+}
+
+function TemperatureLegend({ min, max, format }: { min: number; max: number; format: (c: number) => string }) {
+  const steps = 10;
+  return (
+    <View style={styles.legend} pointerEvents="none" testID="temperature-legend" accessibilityLabel={`Mean water temperature from ${format(min)} to ${format(max)}`}>
+      <Text style={[type.caption, { color: colors.text }]}>Mean water temperature</Text>
+      <View style={styles.legendBar}>
+        {Array.from({ length: steps }, (_, i) => (
+          <View key={i} style={{ flex: 1, backgroundColor: viridis(i / (steps - 1)) }} />
+        ))}
+      </View>
+      <View style={styles.legendEnds}>
+        <Text style={[type.number, styles.legendText]}>{format(min)}</Text>
+        <Text style={[type.number, styles.legendText]}>{format(max)}</Text>
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { flex: 1, minHeight: 0, backgroundColor: colors.background },
+  viewport: { flex: 1, minHeight: 240, overflow: 'hidden', position: 'relative', backgroundColor: '#FBFAF7', touchAction: 'none', cursor: 'crosshair' } as object,
+  wrapper: { position: 'absolute', left: 0, top: 0, transformOrigin: '0 0' } as object,
+  faceTag: { position: 'absolute', right: space.sm, top: space.sm, color: colors.textMuted, backgroundColor: 'rgba(255,255,255,0.85)', paddingHorizontal: space.xs },
+  readout: { paddingHorizontal: space.md, paddingVertical: space.sm, color: colors.text, backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.border },
+  legend: { position: 'absolute', left: space.sm, bottom: space.sm, width: 200, padding: space.sm, backgroundColor: 'rgba(255,255,255,0.92)', borderRadius: 6, gap: space.xxs },
+  legendBar: { flexDirection: 'row', height: 10, borderRadius: 2, overflow: 'hidden' },
+  legendEnds: { flexDirection: 'row', justifyContent: 'space-between' },
+  legendText: { fontSize: 12, color: colors.text },
+  keyRow: { flexDirection: 'row', gap: space.md, paddingVertical: space.xs },
+  keyCell: { width: 150, color: colors.text },
+  keyWhat: { flex: 1, color: colors.text },
+});

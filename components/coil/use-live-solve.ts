@@ -1,0 +1,62 @@
+/**
+ * Live results: the drawing is traced on the client at once (topology errors show instantly) and, 150 ms after the
+ * last change, solved by the server (POST /api/solve through react-query). A result is "fresh" only when it belongs
+ * to the document version on screen; otherwise it is kept but marked stale. Invalid drawings are not sent: their
+ * errors are the answer, never old numbers.
+ */
+import { useEffect, useMemo, useState } from 'react';
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import { solve } from '@/lib/api/solve';
+import { coilDocumentSchema } from '@/lib/schema/coil-document';
+import { traceCircuits, type Topology } from '@/lib/engine/topology';
+import type { CoilDocument, SolveResult } from '@/lib/engine/types';
+
+export const LIVE_SOLVE_DELAY_MS = 150;
+
+export interface LiveSolve {
+  topology: Topology;
+  /** Field messages when the document fails validation (then nothing is solved). */
+  documentIssues: { path: string; message: string }[];
+  /** The latest server result, possibly for an older drawing. */
+  result: SolveResult | null;
+  /** True when `result` belongs to the drawing on screen. */
+  fresh: boolean;
+  solving: boolean;
+  error: string | null;
+}
+
+export function useLiveSolve(coilId: string, document: CoilDocument, version: number): LiveSolve {
+  const topology = useMemo(() => traceCircuits(document), [document]);
+  const issues = useMemo(() => {
+    const parsed = coilDocumentSchema.safeParse(document);
+    return parsed.success ? [] : parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
+  }, [document]);
+  const solvable = topology.valid && issues.length === 0;
+
+  const [request, setRequest] = useState({ document, version, solvable });
+  useEffect(() => {
+    const t = setTimeout(() => setRequest({ document, version, solvable }), LIVE_SOLVE_DELAY_MS);
+    return () => clearTimeout(t);
+  }, [document, version, solvable]);
+
+  const query = useQuery({
+    queryKey: ['solve', coilId, request.version],
+    queryFn: async () => ({ version: request.version, result: await solve(request.document) }),
+    enabled: request.solvable,
+    placeholderData: keepPreviousData,
+    staleTime: Infinity,
+    gcTime: 30_000,
+    retry: 1,
+  });
+
+  const data = query.data;
+  const fresh = solvable && data !== undefined && data.version === version && !query.isPlaceholderData;
+  return {
+    topology,
+    documentIssues: issues,
+    result: data?.result ?? null,
+    fresh,
+    solving: solvable && (!fresh || query.isFetching),
+    error: query.error ? query.error.message : null,
+  };
+}

@@ -1,0 +1,11 @@
+/** Mailed single-use tokens: 32 random bytes for the link, only their SHA-256 in the database. */
+import { createHash, randomBytes } from 'node:crypto';
+
+export function newToken(): { token: string; tokenHash: string } {
+  const token = randomBytes(32).toString('base64url');
+  return { token, tokenHash: hashToken(token) };
+}
+
+export function hashToken(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}
