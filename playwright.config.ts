@@ -30,7 +30,7 @@ export default defineConfig({
     { name: 'wide', use: { viewport: { width: 1440, height: 900 } } },
   ],
   webServer: {
-    command: 'node_modules/.bin/tsx server/index.ts',
+    command: 'node --import tsx server/index.ts',
     url: `http://127.0.0.1:${PORT}/api/health`,
     reuseExistingServer: false,
     timeout: 90_000,

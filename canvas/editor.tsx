@@ -128,6 +128,7 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
         onFit={fit}
         onTemperature={() => setTemperatureOn((on) => !on)}
         onHelp={keyboard ? () => setHelpOpen(true) : undefined}
+        compact={!keyboard}
       />
       <View
         ref={viewportRef}

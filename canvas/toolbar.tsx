@@ -1,5 +1,5 @@
 /** The editor's toolbar: drawing tools, the end face shown, undo/redo, fit, temperature colours and help. */
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '@/components/ui/theme';
 import type { FaceShown, Tool } from './session';
 
@@ -30,10 +30,10 @@ const tools: { tool: Tool; label: string; hint: string }[] = [
   { tool: 'select', label: 'Select', hint: 'Select tool: tap a tube to see its circuit (V)' },
 ];
 
-const faces: { face: FaceShown; label: string; hint: string }[] = [
-  { face: 'connection', label: 'Connection end', hint: 'Show the connection end (headers and return bends)' },
-  { face: 'opposite', label: 'Opposite end', hint: 'Show the opposite end (hairpins)' },
-  { face: 'both', label: 'Both', hint: 'Show both ends, the opposite end faint; drawing acts on the connection end' },
+const faces: { face: FaceShown; label: string; short: string; hint: string }[] = [
+  { face: 'connection', label: 'Connection end', short: 'Connection', hint: 'Show the connection end (headers and return bends)' },
+  { face: 'opposite', label: 'Opposite end', short: 'Opposite', hint: 'Show the opposite end (hairpins)' },
+  { face: 'both', label: 'Both', short: 'Both', hint: 'Show both ends, the opposite end faint; drawing acts on the connection end' },
 ];
 
 export interface ToolbarProps {
@@ -50,11 +50,13 @@ export interface ToolbarProps {
   onFit: () => void;
   onTemperature: () => void;
   onHelp?: () => void;
+  /** Phones: one row that scrolls sideways inside the bar, so the sheet keeps the height. */
+  compact?: boolean;
 }
 
 export function EditorToolbar(p: ToolbarProps) {
-  return (
-    <View style={styles.bar} accessibilityLabel="Editor tools">
+  const groups = (
+    <>
       <View style={styles.group} role="toolbar" accessibilityLabel="Drawing tools">
         {tools.map((t) => (
           <ToolButton key={t.tool} label={t.label} hint={t.hint} active={p.tool === t.tool} onPress={() => p.onTool(t.tool)} testID={`tool-${t.tool}`} />
@@ -62,7 +64,7 @@ export function EditorToolbar(p: ToolbarProps) {
       </View>
       <View style={styles.group} role="toolbar" accessibilityLabel="End face shown">
         {faces.map((f) => (
-          <ToolButton key={f.face} label={f.label} hint={f.hint} active={p.face === f.face} onPress={() => p.onFace(f.face)} testID={`face-${f.face}`} />
+          <ToolButton key={f.face} label={p.compact ? f.short : f.label} hint={f.hint} active={p.face === f.face} onPress={() => p.onFace(f.face)} testID={`face-${f.face}`} />
         ))}
       </View>
       <View style={styles.group}>
@@ -79,12 +81,26 @@ export function EditorToolbar(p: ToolbarProps) {
         />
         {p.onHelp ? <ToolButton label="Keys" hint="Keyboard shortcuts (?)" onPress={p.onHelp} testID="shortcuts-help" /> : null}
       </View>
+    </>
+  );
+  if (p.compact) {
+    return (
+      <ScrollView horizontal style={styles.compactBar} contentContainerStyle={styles.compactContent} accessibilityLabel="Editor tools" showsHorizontalScrollIndicator={false}>
+        {groups}
+      </ScrollView>
+    );
+  }
+  return (
+    <View style={styles.bar} accessibilityLabel="Editor tools">
+      {groups}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   bar: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, padding: space.sm, backgroundColor: colors.surface, borderBottomWidth: 1, borderBottomColor: colors.border },
+  compactBar: { flexGrow: 0, backgroundColor: colors.surface, borderBottomWidth: 1, borderBottomColor: colors.border },
+  compactContent: { flexDirection: 'row', gap: space.sm, padding: space.xs },
   group: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xxs, padding: space.xxs, borderRadius: radius.sm, backgroundColor: colors.surfaceMuted },
   btn: { minHeight: 36, minWidth: 36, paddingHorizontal: space.sm, justifyContent: 'center', alignItems: 'center', borderRadius: radius.sm - 2 },
   btnOn: { backgroundColor: colors.primary },

@@ -23,7 +23,7 @@ fi
 PORT="${PORT:-8080}"
 export PORT HOST="${HOST:-127.0.0.1}" NODE_ENV="${NODE_ENV:-production}" FAKE_SERVICES="${FAKE_SERVICES:-1}"
 export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
-node_modules/.bin/tsx server/index.ts &
+node --import tsx server/index.ts &
 server=$!
 trap 'kill -TERM $server 2>/dev/null; wait $server 2>/dev/null; exit 0' INT TERM
 for _ in $(seq 1 120); do

@@ -14,6 +14,8 @@ import { authRateLimit } from '@/server/middleware/rate-limit';
 import { sessionReader } from '@/server/middleware/session';
 import { staticSite } from '@/server/middleware/static-site';
 import { apiRouter } from '@/server/routes';
+import { attachmentRouter } from '@/server/routes/attachments';
+import { exportRouter } from '@/server/routes/exports';
 import { reviewApiRouter } from '@/server/routes/review-api';
 import { createServices } from '@/server/services';
 import type { SolveFn } from '@/server/services/context';
@@ -27,6 +29,9 @@ export interface AppDeps {
   solve?: SolveFn;
   now?: () => Date;
 }
+
+/** The path as the client sent it (req.url is relative to the router that answered). */
+const fullUrl = (req: { url?: string; originalUrl?: string }) => req.originalUrl ?? req.url ?? '';
 
 const LOOPBACK = /^(127\.\d+\.\d+\.\d+|localhost|::1)$/;
 
@@ -50,7 +55,13 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     helmet({
       strictTransportSecurity: httpsOnly,
-      contentSecurityPolicy: httpsOnly ? true : { directives: { upgradeInsecureRequests: null } },
+      contentSecurityPolicy: {
+        directives: {
+          // blob: for previews of picked images and generated drawings in the browser.
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          ...(httpsOnly ? {} : { upgradeInsecureRequests: null }),
+        },
+      },
     }),
   );
   app.use(
@@ -59,11 +70,11 @@ export function createApp(deps: AppDeps): Express {
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
       // One short line per request: no headers (cookies), no stack for plain 5xx replies.
       serializers: {
-        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        req: (req: { method: string; url: string; raw?: { originalUrl?: string } }) => ({ method: req.method, url: req.raw?.originalUrl ?? req.url }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
-      customErrorMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
-      customSuccessMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
+      customErrorMessage: (req, res) => `${req.method} ${fullUrl(req)} ${res.statusCode}`,
+      customSuccessMessage: (req, res) => `${req.method} ${fullUrl(req)} ${res.statusCode}`,
       customAttributeKeys: { err: 'error' },
     }),
   );
@@ -72,7 +83,10 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/auth', authRateLimit(config.rateLimitAuthMax));
   app.use('/api', sessionReader(auth));
   app.use('/api', apiRouter(services, serviceDeps));
-  app.use('/api', reviewApiRouter({ ...deps, solve: deps.solve ?? solveCoil, auth }));
+  // Versions, review links and comments; attachments (each its own module, sharing the service deps).
+  app.use('/api', reviewApiRouter(serviceDeps));
+  app.use('/api', attachmentRouter(serviceDeps));
+  app.use('/api', exportRouter(serviceDeps));
   app.use('/api', apiNotFound);
   app.use(staticSite(config.distDir));
   app.use(createErrorHandler(logger));

@@ -30,6 +30,12 @@ async function main(): Promise<void> {
     stops.unshift(() => smtp.close());
     mailer = createSmtpMailer(smtp.url, config.mailFrom);
     logger.info({ smtp: smtp.url }, 'fake SMTP capturing mail into outbox_messages');
+    // Attachments go to an in-process S3 fake (s3rver, data in .tmp/fake-s3) on a random loopback port.
+    const { startFakeS3 } = await import('@/server/storage/fake-s3');
+    const s3 = await startFakeS3(config.s3);
+    config.s3 = s3.settings;
+    stops.unshift(() => s3.close());
+    logger.info({ s3: s3.settings.endpoint }, 'fake S3 storing attachments');
   } else if (config.smtpUrl) {
     mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
   } else {

@@ -8,7 +8,7 @@ import { AuthLayout } from '@/components/auth/auth-layout';
 import { AuthLink, AuthNote } from '@/components/auth/auth-link';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { fieldErrorsFromApi, messageOf, validate, type FieldErrors } from '@/components/ui/form-errors';
+import { fieldErrorsFromApi, messageOf, validate, withoutField, type FieldErrors } from '@/components/ui/form-errors';
 import { Stack } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
 
@@ -40,7 +40,10 @@ export function ForgotPasswordScreen() {
           <TextField
             label="E-mail"
             value={email}
-            onChangeText={setEmail}
+            onChangeText={(t) => {
+              setEmail(t);
+              setErrors((e) => withoutField(e, 'email'));
+            }}
             error={errors.email}
             autoComplete="email"
             inputMode="email"

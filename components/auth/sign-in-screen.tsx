@@ -11,7 +11,7 @@ import { AuthLink, AuthNote } from '@/components/auth/auth-link';
 import { safeNext } from '@/components/auth/safe-next';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { fieldErrorsFromApi, messageOf, validate, type FieldErrors } from '@/components/ui/form-errors';
+import { fieldErrorsFromApi, messageOf, validate, withoutField, type FieldErrors } from '@/components/ui/form-errors';
 import { Stack } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
 
@@ -52,7 +52,10 @@ export function SignInScreen({ next }: { next?: string }) {
           <TextField
             label="E-mail"
             value={email}
-            onChangeText={setEmail}
+            onChangeText={(t) => {
+              setEmail(t);
+              setErrors((e) => withoutField(e, 'email'));
+            }}
             error={errors.email}
             autoComplete="email"
             inputMode="email"
@@ -63,7 +66,10 @@ export function SignInScreen({ next }: { next?: string }) {
           <TextField
             label="Password"
             value={password}
-            onChangeText={setPassword}
+            onChangeText={(t) => {
+              setPassword(t);
+              setErrors((e) => withoutField(e, 'password'));
+            }}
             error={errors.password}
             secureTextEntry
             autoComplete="current-password"

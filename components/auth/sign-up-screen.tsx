@@ -11,7 +11,7 @@ import { AuthLink, AuthNote } from '@/components/auth/auth-link';
 import { safeNext } from '@/components/auth/safe-next';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { fieldErrorsFromApi, messageOf, validate, type FieldErrors } from '@/components/ui/form-errors';
+import { fieldErrorsFromApi, messageOf, validate, withoutField, type FieldErrors } from '@/components/ui/form-errors';
 import { Stack } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
 
@@ -50,11 +50,24 @@ export function SignUpScreen({ next }: { next?: string }) {
               {formError}
             </Banner>
           ) : null}
-          <TextField label="Your name" value={name} onChangeText={setName} error={errors.name} autoComplete="name" testID="sign-up-name" />
+          <TextField
+            label="Your name"
+            value={name}
+            onChangeText={(t) => {
+              setName(t);
+              setErrors((e) => withoutField(e, 'name'));
+            }}
+            error={errors.name}
+            autoComplete="name"
+            testID="sign-up-name"
+          />
           <TextField
             label="E-mail"
             value={email}
-            onChangeText={setEmail}
+            onChangeText={(t) => {
+              setEmail(t);
+              setErrors((e) => withoutField(e, 'email'));
+            }}
             error={errors.email}
             autoComplete="email"
             inputMode="email"
@@ -64,7 +77,10 @@ export function SignUpScreen({ next }: { next?: string }) {
           <TextField
             label="Password"
             value={password}
-            onChangeText={setPassword}
+            onChangeText={(t) => {
+              setPassword(t);
+              setErrors((e) => withoutField(e, 'password'));
+            }}
             error={errors.password}
             hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
             secureTextEntry

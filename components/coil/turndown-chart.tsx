@@ -11,7 +11,7 @@ import type { TurndownPoint } from '@/lib/engine/types';
 
 const W = 340;
 const H = 200;
-const PAD = { l: 52, r: 52, t: 16, b: 36 };
+const PAD = { l: 52, r: 52, t: 30, b: 36 };
 
 export function TurndownChart({ points, system }: { points: TurndownPoint[]; system: UnitSystem }) {
   const pts = points.filter((p) => p.capacity_W !== undefined).sort((a, b) => a.flowFraction - b.flowFraction);
@@ -51,10 +51,10 @@ export function TurndownChart({ points, system }: { points: TurndownPoint[]; sys
             </SvgText>
           </G>
         ))}
-        <SvgText x={PAD.l - 4} y={PAD.t - 4} textAnchor="end" fill={capColour} {...font}>
+        <SvgText x={PAD.l} y={PAD.t - 16} textAnchor="middle" fill={capColour} {...font}>
           {unitLabel('power', system)}
         </SvgText>
-        <SvgText x={W - PAD.r + 4} y={PAD.t - 4} textAnchor="start" fill={reColour} {...font}>
+        <SvgText x={W - PAD.r} y={PAD.t - 16} textAnchor="middle" fill={reColour} {...font}>
           Re min
         </SvgText>
         {[2300, 4000].map((re) => (

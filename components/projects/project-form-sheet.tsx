@@ -81,7 +81,11 @@ export function ProjectFormSheet({
     // eslint-disable-next-line react-hooks/exhaustive-deps -- reset only when the sheet opens
   }, [open]);
 
-  const set = (key: keyof Values) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
+  // Editing a field clears its message; the rest stay until the next try.
+  const set = (key: keyof Values) => (text: string) => {
+    setValues((v) => ({ ...v, [key]: text }));
+    setErrors(({ [key]: _cleared, ...rest }) => rest);
+  };
   const submit = () => {
     const r = validate(editing ? updateProjectBodySchema : createProjectBodySchema, values);
     setErrors(r.errors ?? {});

@@ -124,7 +124,7 @@ export function ProjectsScreen() {
       <View role="list" accessibilityLabel={`Projects of ${team.name}`} style={styles.cards} testID="projects-list">
         {list.map((p) => (
           <Link key={p.id} href={`/projects/${p.id}`} asChild>
-            <Pressable role="link" accessibilityLabel={`Open project ${p.name}`} style={({ pressed }) => [styles.card, pressed && styles.cardPressed]}>
+            <Pressable role="link" accessibilityLabel={`Open project ${p.name}`} style={styles.card}>
               <Text style={[type.bodyStrong, { color: colors.text }]} numberOfLines={2}>
                 {p.name}
               </Text>
@@ -205,6 +205,5 @@ const styles = StyleSheet.create({
     padding: space.lg,
     gap: space.xs,
   },
-  cardPressed: { backgroundColor: colors.primarySoft },
   nameLink: { color: colors.primary },
 });

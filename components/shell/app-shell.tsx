@@ -22,6 +22,8 @@ interface NavItem {
   icon: NavIconName;
 }
 
+// Under <Link asChild> (web) a style function is dropped and a style array crashes ("Failed to set an indexed
+// property on CSSStyleDeclaration"), so children of Link asChild get one flattened style object.
 const NAV: readonly NavItem[] = [
   { href: '/', label: 'Projects', icon: 'projects' },
   { href: '/team', label: 'Team', icon: 'team' },
@@ -77,7 +79,7 @@ function WideShell({ children }: { children: ReactNode }) {
                   role="link"
                   accessibilityLabel={item.label}
                   aria-selected={active}
-                  style={({ pressed }) => [styles.sideItem, active && styles.sideItemOn, pressed && { opacity: 0.85 }]}
+                  style={StyleSheet.flatten([styles.sideItem, active && styles.sideItemOn])}
                 >
                   <NavIcon name={item.icon} color={active ? palette.copper500 : colors.textOnDarkMuted} />
                   <Text style={[type.bodyStrong, { color: active ? colors.textOnDark : colors.textOnDarkMuted }]}>{item.label}</Text>
@@ -131,7 +133,7 @@ function PhoneShell({ children }: { children: ReactNode }) {
                 role="link"
                 accessibilityLabel={item.label}
                 aria-selected={active}
-                style={({ pressed }) => [styles.tab, pressed && { opacity: 0.7 }]}
+                style={styles.tab}
               >
                 <View style={[styles.tabPill, active && styles.tabPillOn]}>
                   <NavIcon name={item.icon} color={active ? colors.primary : colors.textMuted} />

@@ -21,10 +21,11 @@ export function TeamPicker({ onDark = false, compact = false }: { onDark?: boole
     );
   }
   return (
-    <View style={compact ? styles.compact : undefined}>
+    <View style={compact ? styles.compact : styles.single}>
+      {compact ? null : <Text style={[type.caption, { color: onDark ? colors.textOnDarkMuted : colors.textMuted }]}>Team</Text>}
       <Select
         label="Team"
-        hideLabel={compact}
+        hideLabel
         value={team.id}
         options={teams.map((t) => ({ value: t.id, label: t.name, description: `Your role: ${ROLE_LABELS[t.role]}` }))}
         onChange={(id) => {

@@ -4,7 +4,7 @@
  * it with `sort` + `onSortChange` (e.g. sorting done by the server).
  */
 import { useMemo, useState, type ReactNode } from 'react';
-import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { Pressable, ScrollView, StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { colors, fonts, radius, space, type } from '@/components/ui/theme';
 
 export type SortDir = 'asc' | 'desc';
@@ -76,84 +76,89 @@ export function DataTable<Row>({
     if (!controlledSort) setLocalSort(next);
   };
 
-  const minTotal = columns.reduce((s, c) => s + (c.minWidth ?? 120), 0);
+  const minTotal = columns.reduce((s, c) => s + (c.minWidth ?? 120), 0) + 2;
+  // Fill the available width; scroll sideways (inside the table only) when the columns cannot fit.
+  const [available, setAvailable] = useState(0);
+  const onLayout = (e: LayoutChangeEvent) => setAvailable(e.nativeEvent.layout.width);
+  const fits = available >= minTotal;
 
-  return (
-    <ScrollView horizontal style={styles.scroller} contentContainerStyle={styles.scrollContent}>
-      <View role="table" accessibilityLabel={label} style={[styles.table, { minWidth: minTotal }]} testID={testID}>
-        <View role="row" style={[styles.row, styles.headRow]}>
-          {columns.map((c) => {
-            const active = sort?.key === c.key;
-            const arrow = active ? (sort?.dir === 'asc' ? '▲' : '▼') : '';
-            const title = c.unit ? `${c.title} (${c.unit})` : c.title;
-            const cellStyle = [styles.cell, { flex: c.flex ?? 1, minWidth: c.minWidth ?? 120 }, c.numeric && styles.numCell];
-            return c.sortable ? (
-              <Pressable
-                key={c.key}
-                role="columnheader"
-                accessibilityLabel={`${title}, ${active ? (sort?.dir === 'asc' ? 'sorted ascending' : 'sorted descending') : 'not sorted'}. Press to sort.`}
-                onPress={() => toggle(c.key)}
-                style={({ pressed }) => [cellStyle, styles.headCell, pressed && { backgroundColor: colors.border }]}
-              >
-                <Text style={[type.smallStrong, styles.headText, c.numeric && styles.right]} numberOfLines={2}>
-                  {title} <Text style={styles.arrow}>{arrow}</Text>
-                </Text>
-              </Pressable>
-            ) : (
-              <View key={c.key} role="columnheader" style={[cellStyle, styles.headCell]}>
-                <Text style={[type.smallStrong, styles.headText, c.numeric && styles.right]} numberOfLines={2}>
-                  {title}
-                </Text>
-              </View>
-            );
-          })}
-        </View>
-        {sorted.map((row, i) => {
-          const cells = columns.map((c) => {
-            const content = c.render(row);
-            return (
-              <View key={c.key} role="cell" style={[styles.cell, { flex: c.flex ?? 1, minWidth: c.minWidth ?? 120 }, c.numeric && styles.numCell]}>
-                {typeof content === 'string' || typeof content === 'number' ? (
-                  <Text style={[c.numeric ? styles.num : type.small, styles.cellText, c.numeric && styles.right]} numberOfLines={2}>
-                    {content}
-                  </Text>
-                ) : (
-                  content
-                )}
-              </View>
-            );
-          });
-          const zebra = i % 2 === 1 ? styles.zebra : null;
-          return onRowPress ? (
+  const table = (
+    <View role="table" accessibilityLabel={label} style={[styles.table, { width: fits ? available : minTotal }]} testID={testID}>
+      <View role="row" style={[styles.row, styles.headRow]}>
+        {columns.map((c) => {
+          const active = sort?.key === c.key;
+          const arrow = active ? (sort?.dir === 'asc' ? '▲' : '▼') : '';
+          const title = c.unit ? `${c.title} (${c.unit})` : c.title;
+          const cellStyle = [styles.cell, { flex: c.flex ?? 1, minWidth: c.minWidth ?? 120 }, c.numeric && styles.numCell];
+          return c.sortable ? (
             <Pressable
-              key={rowKey(row)}
-              role="row"
-              accessibilityLabel={rowAccessibilityLabel?.(row)}
-              onPress={() => onRowPress(row)}
-              style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [
-                styles.row,
-                zebra,
-                (pressed || hovered) && styles.rowHover,
-              ]}
+              key={c.key}
+              role="columnheader"
+              accessibilityLabel={`${title}, ${active ? (sort?.dir === 'asc' ? 'sorted ascending' : 'sorted descending') : 'not sorted'}. Press to sort.`}
+              onPress={() => toggle(c.key)}
+              style={({ pressed }) => [cellStyle, styles.headCell, pressed && { backgroundColor: colors.border }]}
             >
-              {cells}
+              <Text style={[type.smallStrong, styles.headText, c.numeric && styles.right]} numberOfLines={2}>
+                {title} <Text style={styles.arrow}>{arrow}</Text>
+              </Text>
             </Pressable>
           ) : (
-            <View key={rowKey(row)} role="row" style={[styles.row, zebra]}>
-              {cells}
+            <View key={c.key} role="columnheader" style={[cellStyle, styles.headCell]}>
+              <Text style={[type.smallStrong, styles.headText, c.numeric && styles.right]} numberOfLines={2}>
+                {title}
+              </Text>
             </View>
           );
         })}
       </View>
-    </ScrollView>
+      {sorted.map((row, i) => {
+        const cells = columns.map((c) => {
+          const content = c.render(row);
+          return (
+            <View key={c.key} role="cell" style={[styles.cell, { flex: c.flex ?? 1, minWidth: c.minWidth ?? 120 }, c.numeric && styles.numCell]}>
+              {typeof content === 'string' || typeof content === 'number' ? (
+                <Text style={[c.numeric ? styles.num : type.small, styles.cellText, c.numeric && styles.right]} numberOfLines={2}>
+                  {content}
+                </Text>
+              ) : (
+                content
+              )}
+            </View>
+          );
+        });
+        const zebra = i % 2 === 1 ? styles.zebra : null;
+        return onRowPress ? (
+          <Pressable
+            key={rowKey(row)}
+            role="row"
+            accessibilityLabel={rowAccessibilityLabel?.(row)}
+            onPress={() => onRowPress(row)}
+            style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [
+              styles.row,
+              zebra,
+              (pressed || hovered) && styles.rowHover,
+            ]}
+          >
+            {cells}
+          </Pressable>
+        ) : (
+          <View key={rowKey(row)} role="row" style={[styles.row, zebra]}>
+            {cells}
+          </View>
+        );
+      })}
+    </View>
+  );
+  return (
+    <View onLayout={onLayout} style={styles.frame}>
+      {available === 0 ? null : fits ? table : <ScrollView horizontal>{table}</ScrollView>}
+    </View>
   );
 }
 
 const styles = StyleSheet.create({
-  scroller: { flexGrow: 0 },
-  scrollContent: { flexGrow: 1 },
+  frame: { alignSelf: 'stretch' },
   table: {
-    flex: 1,
     borderWidth: 1,
     borderColor: colors.border,
     borderRadius: radius.md,

@@ -38,3 +38,10 @@ export function validate<S extends z.ZodType>(
   const r = schema.safeParse(value);
   return r.success ? { data: r.data, errors: null } : { data: null, errors: fieldErrorsFromZod(r.error) };
 }
+
+/** The same messages without `key`: editing a field clears its own message, the others stay until the next try. */
+export function withoutField(errors: FieldErrors, key: string): FieldErrors {
+  if (!(key in errors)) return errors;
+  const { [key]: _cleared, ...rest } = errors;
+  return rest;
+}

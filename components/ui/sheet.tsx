@@ -49,7 +49,7 @@ export function Sheet({
               <Text style={[type.heading, { color: colors.textMuted }]}>×</Text>
             </Pressable>
           </View>
-          <ScrollView style={styles.body} contentContainerStyle={styles.bodyContent} keyboardShouldPersistTaps="handled">
+          <ScrollView style={[styles.body, isWide && styles.bodyWide]} contentContainerStyle={styles.bodyContent} keyboardShouldPersistTaps="handled">
             {children}
           </ScrollView>
           {footer ? <View style={styles.footer}>{footer}</View> : null}
@@ -81,6 +81,7 @@ const styles = StyleSheet.create({
   title: { color: colors.text, flexShrink: 1 },
   close: { width: 40, height: 40, borderRadius: radius.pill, alignItems: 'center', justifyContent: 'center' },
   body: { flexGrow: 0, flexShrink: 1 },
+  bodyWide: { flexGrow: 1 },
   bodyContent: { padding: space.lg, gap: space.lg },
   footer: {
     flexDirection: 'row',

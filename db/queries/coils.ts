@@ -76,3 +76,13 @@ export async function renameCoil(db: Executor, id: string, name: string, userId:
 export async function deleteCoil(db: Executor, id: string): Promise<void> {
   await db.delete(coils).where(eq(coils.id, id));
 }
+
+/** Every coil's id, document and stored summary (for refreshing derived summaries after a solver change). */
+export function listAllCoilSummaries(db: Executor) {
+  return db.select({ id: coils.id, document: coils.document, summary: coils.summary }).from(coils);
+}
+
+/** Replaces the derived summary only; revision and updatedAt stay (the design did not change). */
+export async function setCoilSummary(db: Executor, id: string, summary: CoilSummary | null): Promise<void> {
+  await db.update(coils).set({ summary }).where(eq(coils.id, id));
+}

@@ -1,12 +1,15 @@
 import { and, asc, desc, eq, ilike, or, sql } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/pg-core';
 import type { Executor } from '@/db/client';
-import { projects, type ProjectRow } from '@/db/schema';
+import { projects, users, type ProjectRow } from '@/db/schema';
 
 export type ProjectSort = 'name' | 'updatedAt' | 'client';
 
 // Written out with table names: inside a sub-select drizzle would render bare column names ("id" = coils.id).
 const coilCount = sql<number>`(select count(*)::int from "coils" where "coils"."project_id" = "projects"."id")`;
-const withCount = { project: projects, coilCount };
+const creator = alias(users, 'creator');
+const updater = alias(users, 'updater');
+const withCount = { project: projects, coilCount, createdByName: creator.name, updatedByName: updater.name };
 
 function escapeLike(text: string): string {
   return text.replace(/[\\%_]/g, (c) => `\\${c}`);
@@ -24,6 +27,8 @@ export async function listProjects(
   return db
     .select(withCount)
     .from(projects)
+    .leftJoin(creator, eq(creator.id, projects.createdBy))
+    .leftJoin(updater, eq(updater.id, projects.updatedBy))
     .where(
       and(
         eq(projects.teamId, teamId),
@@ -34,7 +39,13 @@ export async function listProjects(
 }
 
 export async function findProject(db: Executor, id: string) {
-  const [row] = await db.select(withCount).from(projects).where(eq(projects.id, id)).limit(1);
+  const [row] = await db
+    .select(withCount)
+    .from(projects)
+    .leftJoin(creator, eq(creator.id, projects.createdBy))
+    .leftJoin(updater, eq(updater.id, projects.updatedBy))
+    .where(eq(projects.id, id))
+    .limit(1);
   return row;
 }
 

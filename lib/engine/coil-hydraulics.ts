@@ -64,8 +64,16 @@ export function solveCoilHydraulics(
   totalMassFlow_kg_s: number,
   properties: HydraulicPropertyProvider,
   bendMethod: BendMethod,
+  warm?: HydraulicsResult,
 ): HydraulicsResult {
-  return solveCircuitHydraulics(circuitSpecs(g, derived, circuits, temps), circuitMeanTemperatures(circuits, temps), totalMassFlow_kg_s, properties, bendMethod);
+  return solveCircuitHydraulics(
+    circuitSpecs(g, derived, circuits, temps),
+    circuitMeanTemperatures(circuits, temps),
+    totalMassFlow_kg_s,
+    properties,
+    bendMethod,
+    warm ? { massFlows_kg_s: warm.massFlows_kg_s, pressureDrop_Pa: warm.pressureDrop_Pa } : undefined,
+  );
 }
 
 /** Whether a circuit has a leg where the water runs downward (a bend to a lower tube centre). */

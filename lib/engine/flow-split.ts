@@ -11,31 +11,106 @@ import { invertIncreasing } from '@/lib/engine/root-finding';
 /** Relative tolerance on Σ ṁ_c against ṁ_total for the outer solve. */
 export const FLOW_SPLIT_TOTAL_TOLERANCE = 1e-12;
 /** Relative tolerance on ΔP_c(ṁ_c) against ΔP* for each circuit inversion. */
-export const FLOW_SPLIT_CIRCUIT_TOLERANCE = 1e-13;
+export const FLOW_SPLIT_CIRCUIT_TOLERANCE = 1e-11;
 /** Iteration caps (each level); far above the 4–10 steps a typical split needs. */
 export const FLOW_SPLIT_MAX_OUTER_ITERATIONS = 200;
 export const FLOW_SPLIT_MAX_INNER_ITERATIONS = 200;
 
 export type PressureDropFunction = (massFlow_kg_s: number) => number;
 
+/** A previous split of the same circuits (flows and ΔP*) to start from, e.g. the last outer iteration's. */
+export interface WarmStart {
+  massFlows_kg_s: ArrayLike<number>;
+  pressureDrop_Pa: number;
+}
+
 export interface FlowSplit {
   /** Mass flow per circuit, kg/s; sums to the total. */
   massFlows_kg_s: Float64Array;
   /** The common header-to-header pressure drop ΔP*, Pa. */
   pressureDrop_Pa: number;
-  /** Outer iterations used. */
+  /** Iterations used (quasi-Newton steps, or outer bracketed steps when it fell back). */
   iterations: number;
   converged: boolean;
+}
+
+/** Joint quasi-Newton steps tried before falling back to the bracketed solve. */
+export const FLOW_SPLIT_NEWTON_MAX_ITERATIONS = 40;
+
+/**
+ * Joint quasi-Newton split (the fast path; ENGINEERING.md 3.6 step 1, "Newton on the vector with Jacobian
+ * diag(dΔP_c/dṁ_c)"), in logarithms: with n_c = d ln ΔP_c / d ln ṁ_c (secant estimate, 1.8 to start), the common
+ * ln ΔP* that makes the linearised flows add up to the total is
+ *   ln ΔP* = [ṁ_total − Σ ṁ_c + Σ ṁ_c ln ΔP_c / n_c] / Σ (ṁ_c / n_c),
+ * and each flow moves by ṁ_c ← ṁ_c exp[(ln ΔP* − ln ΔP_c)/n_c]. One pressure-drop call per circuit per step.
+ * Returns null when it has not settled within the step cap (the caller then runs the bracketed solve).
+ */
+function newtonSplit(dropFunctions: PressureDropFunction[], total: number, start: ArrayLike<number>): FlowSplit | null {
+  const n = dropFunctions.length;
+  const flows = new Float64Array(n);
+  let startSum = 0;
+  for (let c = 0; c < n; c++) startSum += start[c];
+  if (!(startSum > 0)) return null;
+  for (let c = 0; c < n; c++) {
+    flows[c] = (start[c] * total) / startSum;
+    if (!(flows[c] > 0)) return null;
+  }
+  const lnDrop = new Float64Array(n);
+  const slope = new Float64Array(n).fill(1.8);
+  const prevLnFlow = new Float64Array(n).fill(NaN);
+  const prevLnDrop = new Float64Array(n).fill(NaN);
+  for (let it = 1; it <= FLOW_SPLIT_NEWTON_MAX_ITERATIONS; it++) {
+    let sum = 0;
+    let lnMin = Infinity;
+    let lnMax = -Infinity;
+    for (let c = 0; c < n; c++) {
+      const d = dropFunctions[c](flows[c]);
+      if (!(d > 0) || !Number.isFinite(d)) return null;
+      const ld = Math.log(d);
+      const lm = Math.log(flows[c]);
+      if (it > 1 && lm !== prevLnFlow[c]) {
+        const sl = (ld - prevLnDrop[c]) / (lm - prevLnFlow[c]);
+        if (sl > 0.5 && sl < 3) slope[c] = sl;
+      }
+      prevLnDrop[c] = ld;
+      prevLnFlow[c] = lm;
+      lnDrop[c] = ld;
+      sum += flows[c];
+      if (ld < lnMin) lnMin = ld;
+      if (ld > lnMax) lnMax = ld;
+    }
+    if (lnMax - lnMin <= FLOW_SPLIT_CIRCUIT_TOLERANCE && Math.abs(sum - total) <= FLOW_SPLIT_TOTAL_TOLERANCE * total) {
+      const scale = total / sum;
+      for (let c = 0; c < n; c++) flows[c] *= scale;
+      return { massFlows_kg_s: flows, pressureDrop_Pa: Math.exp(0.5 * (lnMin + lnMax)), iterations: it, converged: true };
+    }
+    let num = total - sum;
+    let den = 0;
+    for (let c = 0; c < n; c++) {
+      num += (flows[c] * lnDrop[c]) / slope[c];
+      den += flows[c] / slope[c];
+    }
+    const lnTarget = num / den;
+    for (let c = 0; c < n; c++) {
+      const step = (lnTarget - lnDrop[c]) / slope[c];
+      flows[c] *= Math.exp(Math.max(-2, Math.min(2, step)));
+    }
+  }
+  return null;
 }
 
 /**
  * Split `total_kg_s` between circuits given by their pressure-drop functions.
  * Example: two circuits ΔP = m² and ΔP = 4m², total 3 kg/s → flows 2 and 1 kg/s, ΔP* = 4 Pa.
  */
-export function splitFlowBetweenCircuits(dropFunctions: PressureDropFunction[], total_kg_s: number): FlowSplit {
+export function splitFlowBetweenCircuits(dropFunctions: PressureDropFunction[], total_kg_s: number, warm?: WarmStart): FlowSplit {
   const n = dropFunctions.length;
   if (n === 0) throw new RangeError('splitFlowBetweenCircuits: no circuits');
   if (!(total_kg_s > 0) || !Number.isFinite(total_kg_s)) throw new RangeError(`splitFlowBetweenCircuits: total flow ${total_kg_s} must be positive`);
+  if (n > 1) {
+    const fast = newtonSplit(dropFunctions, total_kg_s, warm && warm.massFlows_kg_s.length === n ? warm.massFlows_kg_s : new Float64Array(n).fill(1));
+    if (fast) return fast;
+  }
   const flows = new Float64Array(n);
   if (n === 1) {
     flows[0] = total_kg_s;

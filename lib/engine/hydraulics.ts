@@ -11,7 +11,7 @@
 import { frictionFactorChurchill1977 } from '@/lib/engine/friction';
 import { bendLossIto1960, bendLossRennelsHudson2012, ENTRANCE_LOSS_SHARP, EXIT_LOSS } from '@/lib/engine/bends';
 import { flowRegime } from '@/lib/engine/tube-side';
-import { maldistributionIndex, splitFlowBetweenCircuits } from '@/lib/engine/flow-split';
+import { maldistributionIndex, splitFlowBetweenCircuits, type WarmStart } from '@/lib/engine/flow-split';
 import type { Regime } from '@/lib/engine/types';
 
 /** Drawn copper roughness used when the document gives none, m (ENGINEERING.md 3.4 [M]). */
@@ -109,18 +109,41 @@ export function circuitPressureDrop_Pa(model: CircuitPressureModel, massFlow_kg_
   const reFactor = g * d;
   const g2half = 0.5 * g * g;
   let dp = 0;
+  // Tubes and bends at the same viscosity share Re and f_D: evaluate Churchill once per distinct viscosity run.
+  let lastMu = NaN;
+  let lastF = NaN;
+  const friction = (mu: number): number => {
+    if (mu !== lastMu) {
+      lastMu = mu;
+      lastF = frictionFactorChurchill1977(reFactor / mu, model.relativeRoughness);
+    }
+    return lastF;
+  };
   for (let i = 0; i < model.tubeDensity.length; i++) {
-    const re = reFactor / model.tubeViscosity[i];
-    dp += (frictionFactorChurchill1977(re, model.relativeRoughness) * model.lengthOverDiameter * g2half) / model.tubeDensity[i];
+    dp += (friction(model.tubeViscosity[i]) * model.lengthOverDiameter * g2half) / model.tubeDensity[i];
   }
+  let kF0 = NaN, kRd0 = NaN, kK0 = NaN, kF1 = NaN, kRd1 = NaN, kK1 = NaN;
   for (let i = 0; i < model.bendDensity.length; i++) {
-    const re = reFactor / model.bendViscosity[i];
+    const mu = model.bendViscosity[i];
+    const re = reFactor / mu;
     const rd = model.bendRadiusOverDiameter[i];
     let k: number;
     if (model.bendMethod === 'ito' && re / (rd * rd) > ITO_DEAN_LIMIT) k = bendLossIto1960(re, rd, 180);
     else {
       if (model.bendMethod === 'ito') model.itoOutOfRange = true;
-      k = bendLossRennelsHudson2012(frictionFactorChurchill1977(re, model.relativeRoughness), Math.PI, rd);
+      const f = friction(mu);
+      // Two-slot memo: a circuit's bends come in few radii (same-row and next-row spans).
+      if (f === kF0 && rd === kRd0) k = kK0;
+      else if (f === kF1 && rd === kRd1) k = kK1;
+      else {
+        k = bendLossRennelsHudson2012(f, Math.PI, rd);
+        kF1 = kF0;
+        kRd1 = kRd0;
+        kK1 = kK0;
+        kF0 = f;
+        kRd0 = rd;
+        kK0 = k;
+      }
     }
     dp += (k * g2half) / model.bendDensity[i];
   }
@@ -143,6 +166,8 @@ export interface CircuitHydraulics {
 
 export interface HydraulicsResult {
   circuits: CircuitHydraulics[];
+  /** The split's flows, kg/s (a warm start for the next split of the same circuits). */
+  massFlows_kg_s: Float64Array;
   /** Coil water pressure drop = the common header-to-header ΔP (v1 decision 4), Pa. */
   pressureDrop_Pa: number;
   maldistribution: number;
@@ -162,11 +187,13 @@ export function solveCircuitHydraulics(
   totalMassFlow_kg_s: number,
   properties: HydraulicPropertyProvider,
   bendMethod: BendMethod = 'rennels',
+  warm?: WarmStart,
 ): HydraulicsResult {
   const models = specs.map((s) => buildCircuitPressureModel(s, properties, bendMethod));
   const split = splitFlowBetweenCircuits(
     models.map((m) => (flow: number) => circuitPressureDrop_Pa(m, flow)),
     totalMassFlow_kg_s,
+    warm,
   );
   const circuits = models.map((model, c): CircuitHydraulics => {
     const m = split.massFlows_kg_s[c];
@@ -195,6 +222,7 @@ export function solveCircuitHydraulics(
   });
   return {
     circuits,
+    massFlows_kg_s: split.massFlows_kg_s,
     pressureDrop_Pa: split.pressureDrop_Pa,
     maldistribution: maldistributionIndex(split.massFlows_kg_s),
     converged: split.converged,

@@ -28,6 +28,11 @@ export interface InversionOptions {
   guess?: number;
   /** Expected log-log slope d ln f / d ln x used for the first step (default 1.8). */
   slope?: number;
+  /**
+   * The caller guarantees f(lo) <= target <= f(hi): the ends are not evaluated up front (saves two calls when a
+   * good guess is given). If the guarantee is wrong the result comes back with converged = false.
+   */
+  assumeBracket?: boolean;
 }
 
 /**
@@ -50,12 +55,14 @@ export function invertIncreasing(
   }
   if (target === 0) return { x: lo, value: f(lo), iterations: 0, converged: true };
   const absTol = tol * target;
-  let fLo = lo > 0 ? f(lo) : 0;
-  let fHi = f(hi);
-  if (fLo > target + absTol || fHi < target - absTol) {
-    throw new RangeError(`invertIncreasing: target ${target} not inside [${fLo}, ${fHi}]`);
+  let fLo = lo > 0 && !options.assumeBracket ? f(lo) : 0;
+  let fHi = options.assumeBracket ? NaN : f(hi);
+  if (!options.assumeBracket) {
+    if (fLo > target + absTol || fHi < target - absTol) {
+      throw new RangeError(`invertIncreasing: target ${target} not inside [${fLo}, ${fHi}]`);
+    }
+    if (Math.abs(fHi - target) <= absTol) return { x: hi, value: fHi, iterations: 0, converged: true };
   }
-  if (Math.abs(fHi - target) <= absTol) return { x: hi, value: fHi, iterations: 0, converged: true };
 
   // Previous point for the log-log secant.
   let xPrev = NaN;
@@ -64,7 +71,7 @@ export function invertIncreasing(
   const slope0 = options.slope ?? 1.8;
   if (Number.isNaN(x)) {
     // Power-law guess from the upper end.
-    x = hi * Math.pow(target / fHi, 1 / slope0);
+    x = fHi > 0 ? hi * Math.pow(target / fHi, 1 / slope0) : NaN;
     if (!(x > lo && x < hi)) x = 0.5 * (lo + hi);
   }
   let lastResidual = Infinity;
@@ -83,10 +90,12 @@ export function invertIncreasing(
     // Candidate: log-log secant through the last two points, else through the bracket ends.
     let next = NaN;
     if (fx > 0 && x > 0) {
-      let s = NaN;
-      if (fPrev > 0 && xPrev > 0 && xPrev !== x) s = Math.log(fx / fPrev) / Math.log(x / xPrev);
-      else if (fLo > 0 && lo > 0 && fHi > 0) s = Math.log(fHi / fLo) / Math.log(hi / lo);
-      else s = slope0;
+      const s =
+        fPrev > 0 && xPrev > 0 && xPrev !== x
+          ? Math.log(fx / fPrev) / Math.log(x / xPrev)
+          : fLo > 0 && lo > 0 && fHi > 0 && hi > lo
+            ? Math.log(fHi / fLo) / Math.log(hi / lo)
+            : slope0;
       if (Number.isFinite(s) && s > 0) next = x * Math.exp(Math.log(target / fx) / s);
     }
     // Bisect when the fast step leaves the bracket or the residual has not halved over two steps.

@@ -198,7 +198,7 @@ export function solveCoilThermal(
   let capacityPrev = NaN;
   let capacity = 0;
   let converged = false;
-  let iterations = 0;
+  let iterations: number;
   let sweeps = 0;
   const airWarnings: ResultWarning[] = [];
   let fanning = 0;
@@ -265,12 +265,12 @@ export function solveCoilThermal(
       break;
     }
     // 4. Re-split the water with the new temperatures.
-    hydraulics = solveCoilHydraulics(g, derived, circuits, temps, totalWater, providers.fluid, options.bendMethod);
+    hydraulics = solveCoilHydraulics(g, derived, circuits, temps, totalWater, providers.fluid, options.bendMethod, hydraulics);
   }
   if (iterations > OUTER_MAX_ITERATIONS) {
     iterations = OUTER_MAX_ITERATIONS;
     // Not settled: report hydraulics at the last temperatures rather than the previous iteration's.
-    hydraulics = solveCoilHydraulics(g, derived, circuits, temps, totalWater, providers.fluid, options.bendMethod);
+    hydraulics = solveCoilHydraulics(g, derived, circuits, temps, totalWater, providers.fluid, options.bendMethod, hydraulics);
   }
   // When converged, the hydraulics of the last iteration were split at temperatures that agree with the final
   // ones to within the outer tolerance, so they are reported as they are.
@@ -311,8 +311,9 @@ export function solveCoilThermal(
   return {
     mode,
     capacity_W: total,
-    sensibleCapacity_W: Math.min(sensible, total),
-    latentCapacity_W: Math.max(0, total - sensible),
+    // A coil that condenses nothing exchanges sensible heat only (the two balances differ by rounding).
+    sensibleCapacity_W: isWet ? Math.min(sensible, total) : total,
+    latentCapacity_W: isWet ? Math.max(0, total - sensible) : 0,
     leavingAirDryBulb_C: leaving.dryBulb_C,
     leavingAirWetBulb_C: leavingWetBulb,
     leavingAirHumidityRatio: leaving.humidityRatio,

@@ -6,8 +6,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express, { type Router } from 'express';
 
-// Expo puts content-hashed bundles under _expo/static and hashed assets under assets/ (name.<md5>.ext).
-const HASHED = /(^|\/)_expo\/static\/|\.[0-9a-f]{16,}\.[a-z0-9]+$/i;
+// Expo puts content-hashed bundles under _expo/static and hashed assets under assets/ (name.<md5>[@2x].ext).
+const HASHED = /(^|\/)_expo\/static\/|\.[0-9a-f]{16,}(@\d+(\.\d+)?x)?\.[a-z0-9]+$/i;
 
 export function staticSite(distDir: string): Router {
   const router = express.Router();

@@ -290,7 +290,7 @@ function performance(doc: PDFKit.PDFDocument, coil: CoilDocument, result: SolveR
   const waterDelta =
     t.leavingWaterTemperature_C !== undefined ? Math.abs(t.leavingWaterTemperature_C - coil.conditions.fluid.inletTemperature_C) : undefined;
   const waterSide: ValueRow[] = [
-    textRow('Mode', mode || NOT_RATED),
+    mode ? textRow('Mode', mode) : { label: 'Mode', value: '', note: NOT_RATED },
     row('Entering water', show('temperature', coil.conditions.fluid.inletTemperature_C, units)),
     row('Leaving water', show('temperature', t.leavingWaterTemperature_C, units)),
     row('Water temperature change', show('temperatureDifference', waterDelta, units)),
@@ -400,6 +400,16 @@ function warningsBlock(doc: PDFKit.PDFDocument, result: SolveResult): void {
 
 // ---- drawing ----
 
+/** 1.2 pt per mm, about 1:2.4 on paper: the largest the end faces are drawn. */
+const MAX_DRAWING_SCALE_PT_PER_MM = 1.2;
+
+function svgSizeMm(svg: string): { width: number; height: number } {
+  const width = Number(svg.match(/\swidth="([\d.]+)mm"/)?.[1]);
+  const height = Number(svg.match(/\sheight="([\d.]+)mm"/)?.[1]);
+  if (!(width > 0 && height > 0)) throw new Error('end-face SVG without a size in mm');
+  return { width, height };
+}
+
 function drawingPage(doc: PDFKit.PDFDocument, coil: CoilDocument, result: SolveResult, _units: UnitSystem): void {
   doc.addPage();
   sectionHeading(doc, 'Circuiting drawing');
@@ -422,7 +432,11 @@ function drawingPage(doc: PDFKit.PDFDocument, coil: CoilDocument, result: SolveR
     doc.font(REPORT_FONTS.regular.name).fontSize(TYPE.small).fillColor(INK_MUTED);
     doc.text(face === 'connection' ? 'return bends and headers' : 'hairpins', x, top + 12, { width: w, align: 'center', lineBreak: false });
     const svg = renderEndFaceSvg(coil, result, face, { caption: false, fontFamily: 'PlexSans' });
-    SVGtoPDF(doc, svg, x, top + 28, { width: w, height: h - 28, preserveAspectRatio: 'xMidYMin meet', fontCallback });
+    // Fit the column, but never above MAX_DRAWING_SCALE, so a small coil does not get poster-sized labels.
+    const size = svgSizeMm(svg);
+    const scale = Math.min(w / size.width, (h - 28) / size.height, MAX_DRAWING_SCALE_PT_PER_MM);
+    const dw = size.width * scale;
+    SVGtoPDF(doc, svg, x + (w - dw) / 2, top + 28, { width: dw, height: size.height * scale, preserveAspectRatio: 'xMidYMin meet', fontCallback });
   });
   doc.y = f.bottom;
   doc.addPage();

@@ -114,6 +114,21 @@ export function renderEndFaceSvg(
   for (const s of doc.circuiting.supply) if (s.end === face) stubs.set(tubeKey(s.tube), { stub: s, kind: 'supply' });
   for (const s of doc.circuiting.return) if (s.end === face) stubs.set(tubeKey(s.tube), { stub: s, kind: 'return' });
 
+  // Circuit labels beside the sheet, led to their stub under the holes (so a leader never crosses a hole).
+  const labelSide = (stub: Stub) => (stub.tube.row <= g.rows / 2 ? 'left' : 'right');
+  out.push(`<g class="circuit-labels" font-size="${n(labelSize)}" font-weight="bold">`);
+  for (const { stub } of stubs.values()) {
+    const place = map.placeOf(stub.tube);
+    if (!place) continue;
+    const p = mm(stub.tube);
+    const colour = circuitStyle(place.ordinal).colour;
+    const left = labelSide(stub) === 'left';
+    const lx = left ? sheet.x0 - side * 0.5 : sheet.x1 + side * 0.5;
+    out.push(`<line x1="${n(p.x)}" y1="${n(p.y)}" x2="${n(left ? lx + labelSize : lx - labelSize)}" y2="${n(p.y)}" stroke="${colour}" stroke-width="${n(unit * 0.03)}"/>`);
+    out.push(`<text class="circuit-label" x="${n(lx)}" y="${n(p.y + labelSize * 0.35)}" fill="${colour}" text-anchor="middle">C${place.circuitIndex}</text>`);
+  }
+  out.push('</g>');
+
   out.push(`<g class="tubes" stroke-width="${n(Do * 0.1)}">`);
   for (const ref of allTubes(doc)) {
     const p = mm(ref);
@@ -150,13 +165,6 @@ export function renderEndFaceSvg(
     out.push(`<g class="stub ${kind}" data-row="${stub.tube.row}" data-tube="${stub.tube.tube}">`);
     out.push(`<circle cx="${n(p.x)}" cy="${n(p.y)}" r="${n(holeR * 1.05)}" fill="${fill}" stroke="${colour}" stroke-width="${n(Do * 0.16)}"/>`);
     out.push(`<text x="${n(p.x)}" y="${n(p.y + Do * 0.2)}" fill="${ink}">${kind === 'supply' ? 'S' : 'R'}</text>`);
-    if (place) {
-      const leftSide = stub.tube.row <= g.rows / 2;
-      const lx = leftSide ? sheet.x0 - side * 0.5 : sheet.x1 + side * 0.5;
-      const edge = leftSide ? p.x - holeR * 1.1 : p.x + holeR * 1.1;
-      out.push(`<line x1="${n(edge)}" y1="${n(p.y)}" x2="${n(leftSide ? lx + labelSize : lx - labelSize)}" y2="${n(p.y)}" stroke="${colour}" stroke-width="${n(unit * 0.03)}"/>`);
-      out.push(`<text class="circuit-label" x="${n(lx)}" y="${n(p.y + labelSize * 0.35)}" font-size="${n(labelSize)}" fill="${colour}">C${place.circuitIndex}</text>`);
-    }
     out.push('</g>');
   }
   out.push('</g>');

@@ -76,4 +76,4 @@ export function passRange(passes: readonly number[]): string {
 }
 
 export const coilSize = (doc: CoilDocument): string =>
-  `${doc.geometry.rows} rows × ${doc.geometry.tubesPerRow} tubes high`;
+  `${doc.geometry.rows} ${doc.geometry.rows === 1 ? 'row' : 'rows'} × ${doc.geometry.tubesPerRow} tubes high`;

@@ -10,7 +10,6 @@ import { solveRoutes } from '@/server/routes/solve';
 import { teamRoutes } from '@/server/routes/teams';
 import type { Services } from '@/server/services';
 import type { ServiceDeps } from '@/server/services/context';
-import { reviewApiRouter } from '@/server/routes/review-api';
 
 export function apiRouter(services: Services, deps: ServiceDeps): Router {
   const { config } = deps;
@@ -28,7 +27,5 @@ export function apiRouter(services: Services, deps: ServiceDeps): Router {
   r.get('/dev/outbox', async (req, res) => {
     res.json({ messages: await services.outbox.list(signedIn(req).userId) });
   });
-  // Versions, review links and comments (their own engineer's module).
-  r.use(reviewApiRouter(deps));
   return r;
 }

@@ -30,8 +30,9 @@ export function teamRoutes(services: Services, config: Config): Router {
   });
   r.get('/:teamId/projects', async (req, res) => {
     const query = projectListQuery.parse(req.query);
-    const dir = query.dir ?? (query.sort === 'updatedAt' ? 'desc' : 'asc');
-    const projects = await services.projects.list(signedIn(req).userId, param(req, 'teamId'), { ...query, dir });
+    const sort = query.sort ?? 'updatedAt';
+    const dir = query.dir ?? (sort === 'updatedAt' ? 'desc' : 'asc');
+    const projects = await services.projects.list(signedIn(req).userId, param(req, 'teamId'), { q: query.q, sort, dir });
     res.json({ projects });
   });
   r.post('/:teamId/projects', async (req, res) => {

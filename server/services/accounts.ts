@@ -54,7 +54,8 @@ export function accountService(deps: ServiceDeps) {
 
     async signIn(body: SignInBody): Promise<{ user: User; cookie: string }> {
       const user = await findUserByEmail(db, normaliseEmail(body.email));
-      const ok = user ? await verifyPassword(user.passwordHash, body.password) : (await spendPasswordTime(body.password), false);
+      if (!user) await spendPasswordTime(body.password); // an unknown e-mail costs as long as a wrong password
+      const ok = user ? await verifyPassword(user.passwordHash, body.password) : false;
       if (!user || !ok) throw new AppError(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
       return { user: publicUser(user), cookie: await auth.start(user.id) };
     },

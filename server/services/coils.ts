@@ -3,6 +3,7 @@ import { deleteCoil, findCoilTeam, insertCoil, listCoils, renameCoil, saveCoilDr
 import { touchProject } from '@/db/queries/projects';
 import type { CoilRow } from '@/db/schema';
 import type { CoilDocument } from '@/lib/engine/types';
+import { notFound } from '@/server/errors';
 import { coilAccess, conflict, projectAccess } from '@/server/services/access';
 import { summarizeCoil } from '@/server/services/coil-summary';
 import type { ServiceDeps } from '@/server/services/context';
@@ -89,7 +90,7 @@ export function coilService(deps: ServiceDeps) {
     async rename(userId: string, coilId: string, name: string) {
       await coilAccess(db, coilId, userId, 'edit');
       const row = await renameCoil(db, coilId, name, userId);
-      if (!row) throw conflict('gone', 'The coil was deleted meanwhile.');
+      if (!row) throw notFound('The coil'); // deleted between the check and the update
       return publicCoil(row);
     },
 

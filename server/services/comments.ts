@@ -60,7 +60,7 @@ export async function addComment(
   version: FoundVersion,
   author: CommentAuthorInput,
   input: CreateCommentBody,
-  coilUrl: string,
+  coilLink: string,
 ): Promise<Comment> {
   let parentId: string | null = null;
   if (input.parentId) {
@@ -88,7 +88,7 @@ export async function addComment(
       actorId: author.kind === 'member' ? author.userId : null,
       authorName: comment.author.kind === 'guest' ? `${comment.author.name} (guest reviewer)` : comment.author.name,
       body: input.body,
-      url: coilUrl,
+      url: coilLink,
     },
   );
   return comment;

@@ -11,7 +11,7 @@ export interface ProjectInput {
   notes?: string;
 }
 
-export function publicProject(row: { project: ProjectRow; coilCount: number }) {
+export function publicProject(row: { project: ProjectRow; coilCount: number; createdByName: string | null; updatedByName: string | null }) {
   const p = row.project;
   return {
     id: p.id,
@@ -22,7 +22,9 @@ export function publicProject(row: { project: ProjectRow; coilCount: number }) {
     notes: p.notes,
     coilCount: row.coilCount,
     createdBy: p.createdBy,
+    createdByName: row.createdByName,
     updatedBy: p.updatedBy,
+    updatedByName: row.updatedByName,
     createdAt: p.createdAt,
     updatedAt: p.updatedAt,
   };
@@ -39,7 +41,7 @@ export function projectService(deps: ServiceDeps) {
     async create(userId: string, teamId: string, input: ProjectInput) {
       await teamRole(db, teamId, userId, 'edit');
       const row = await insertProject(db, { ...input, teamId, createdBy: userId, updatedBy: userId });
-      return publicProject({ project: row, coilCount: 0 });
+      return publicProject(await projectAccess(db, row.id, userId, 'read'));
     },
 
     async get(userId: string, projectId: string) {

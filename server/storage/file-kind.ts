@@ -45,6 +45,7 @@ export function looksLikePlainText(bytes: Buffer): boolean {
     return false;
   }
   const body = text.replace(/^\ufeff/, '');
+  // eslint-disable-next-line no-control-regex -- control characters are exactly what is refused here
   if (/[\u0000-\u0008\u000b\u000e-\u001f\u007f]/.test(body)) return false;
   const start = body.trimStart();
   return !start.startsWith('<') && !start.startsWith('#!');

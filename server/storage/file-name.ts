@@ -17,6 +17,7 @@ function splitExtension(name: string): { stem: string; ext: string } {
 export function sanitizeFileName(raw: string): string {
   const lastComponent = raw.normalize('NFC').split(/[\\/]/).pop() ?? '';
   const cleaned = lastComponent
+    // eslint-disable-next-line no-control-regex -- control characters are exactly what is removed here
     .replace(/[\u0000-\u001f\u007f-\u009f]/g, '')
     .replace(/[\u200b-\u200f\u202a-\u202e\u2060-\u2069\ufeff]/g, '')
     .replace(/[<>:"|?*]/g, '_')

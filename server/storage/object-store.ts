@@ -63,3 +63,11 @@ export function createObjectStore(s3: S3Settings, client: S3Client = createS3Cli
     },
   };
 }
+
+/**
+ * The origin presigned links point at, for the page's Content-Security-Policy `img-src` (thumbnails are shown
+ * straight from the store): the custom endpoint's origin, or the bucket's virtual-hosted AWS origin.
+ */
+export function storageOrigin(s3: S3Settings): string {
+  return s3.endpoint ? new URL(s3.endpoint).origin : `https://${s3.bucket}.s3.${s3.region}.amazonaws.com`;
+}

@@ -21,6 +21,8 @@ describe('app skeleton', () => {
     fs.writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Tubeloom</title><div id="root"></div>');
     fs.writeFileSync(path.join(dist, '_expo', 'static', 'js', 'web', 'entry-0123456789abcdef0123.js'), 'console.log(1)');
     fs.writeFileSync(path.join(dist, 'favicon.ico'), 'icon');
+    fs.mkdirSync(path.join(dist, 'assets'), { recursive: true });
+    fs.writeFileSync(path.join(dist, 'assets', 'close-icon.808e1b1b9b53114ec2838071a7e6daa7@2x.png'), 'png');
     server = await startTestServer({ env: { DIST_DIR: dist } });
   });
   afterAll(async () => {
@@ -55,6 +57,8 @@ describe('app skeleton', () => {
     const js = await request(server.app).get('/_expo/static/js/web/entry-0123456789abcdef0123.js');
     expect(js.status).toBe(200);
     expect(js.headers['cache-control']).toContain('immutable');
+    const retina = await request(server.app).get('/assets/close-icon.808e1b1b9b53114ec2838071a7e6daa7@2x.png');
+    expect(retina.headers['cache-control']).toContain('immutable');
     const icon = await request(server.app).get('/favicon.ico');
     expect(icon.headers['cache-control']).toBe('no-cache');
   });
@@ -65,6 +69,7 @@ describe('app skeleton', () => {
     expect(res.headers['content-security-policy']).toBeDefined();
     expect(res.headers['content-security-policy']).not.toContain('upgrade-insecure-requests');
     expect(res.headers['strict-transport-security']).toBeUndefined();
+    expect(res.headers['content-security-policy']).toContain("img-src 'self' data: blob:");
   });
 
   it('refuses state-changing requests without our Origin (403 bad_origin)', async () => {

@@ -52,7 +52,16 @@ describe('projects and coils by role', () => {
       .post(`/api/teams/${teamId}/projects`)
       .send({ name: 'Alder Lane school', client: 'Zeta Estates', site: 'Alder Lane', notes: 'Two AHUs' });
     expect(created.status).toBe(201);
-    expect(created.body.project).toMatchObject({ teamId, name: 'Alder Lane school', client: 'Zeta Estates', site: 'Alder Lane', notes: 'Two AHUs', coilCount: 0 });
+    expect(created.body.project).toMatchObject({
+      teamId,
+      name: 'Alder Lane school',
+      client: 'Zeta Estates',
+      site: 'Alder Lane',
+      notes: 'Two AHUs',
+      coilCount: 0,
+      createdByName: 'Member designer',
+      updatedByName: 'Member designer',
+    });
     await agents.owner.post(`/api/teams/${teamId}/projects`).send({ name: 'Birch Court', client: 'Alpha Homes' }).expect(201);
 
     const byName = await agents.viewer.get(`/api/teams/${teamId}/projects?sort=name&dir=asc`);

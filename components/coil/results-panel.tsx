@@ -1,0 +1,231 @@
+/**
+ * Results beside (wide) or under a tab (phone): status (solving, stale, invalid), totals, the per-circuit table,
+ * warnings (tap one to highlight its tubes and circuits on the sheet) and the turndown chart. Numbers are
+ * right-aligned in the mono face and carry units in the user's system.
+ */
+import type { ReactNode } from 'react';
+import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { Banner } from '@/components/ui/banner';
+import { colors, radius, space, type } from '@/components/ui/theme';
+import { formatNumber, formatQuantity, unitLabel, type QuantityKind, type UnitSystem } from '@/lib/units';
+import type { CircuitResult, ResultWarning, SolveResult, TopologyError, TubeRef } from '@/lib/engine/types';
+import { TurndownChart } from './turndown-chart';
+import type { LiveSolve } from './use-live-solve';
+
+const q = (kind: QuantityKind, v: number | undefined, system: UnitSystem) => (v === undefined ? '—' : formatQuantity(kind, v, system).label);
+
+function Figure({ label, value, testID }: { label: string; value: string; testID?: string }) {
+  return (
+    <View style={styles.figure}>
+      <Text style={[type.caption, { color: colors.textMuted }]}>{label}</Text>
+      <Text style={[type.number, styles.figureValue]} testID={testID}>
+        {value}
+      </Text>
+    </View>
+  );
+}
+
+export function Totals({ result, system }: { result: SolveResult; system: UnitSystem }) {
+  const t = result.totals;
+  return (
+    <View style={styles.figures} testID="results-totals">
+      <Figure label={t.mode === 'heating' ? 'Heating capacity' : 'Total capacity'} value={q('power', t.capacity_W, system)} testID="total-capacity" />
+      {t.mode === 'cooling' ? <Figure label="Sensible" value={q('power', t.sensibleCapacity_W, system)} /> : null}
+      {t.mode === 'cooling' ? <Figure label="Latent" value={q('power', t.latentCapacity_W, system)} /> : null}
+      <Figure label="Leaving air dry bulb" value={q('temperature', t.leavingAirDryBulb_C, system)} />
+      {t.leavingAirWetBulb_C !== undefined ? <Figure label="Leaving air wet bulb" value={q('temperature', t.leavingAirWetBulb_C, system)} /> : null}
+      <Figure label="Leaving water" value={q('temperature', t.leavingWaterTemperature_C, system)} />
+      <Figure label="Water pressure drop" value={q('waterPressureDrop', t.waterPressureDrop_Pa, system)} testID="total-water-dp" />
+      <Figure label={t.airPressureDropIsWetEstimate ? 'Air pressure drop (wet, estimate)' : 'Air pressure drop'} value={q('airPressureDrop', t.airPressureDrop_Pa, system)} />
+      {t.condensate_kg_s ? <Figure label="Condensate" value={q('massFlow', t.condensate_kg_s, system)} /> : null}
+      <Figure label="Circuits" value={String(t.circuitCount)} />
+    </View>
+  );
+}
+
+const COLS: { key: string; title: string; kind?: QuantityKind; width: number }[] = [
+  { key: 'index', title: '#', width: 28 },
+  { key: 'passes', title: 'Passes', width: 50 },
+  { key: 'arrangement', title: 'Arrangement', width: 100 },
+  { key: 'flow', title: 'Flow', kind: 'massFlow', width: 58 },
+  { key: 'velocity', title: 'Velocity', kind: 'velocity', width: 60 },
+  { key: 're', title: 'Re', width: 54 },
+  { key: 'regime', title: 'Regime', width: 92 },
+  { key: 'dp', title: 'Δp', kind: 'waterPressureDrop', width: 64 },
+  { key: 'leaving', title: 'Leaving', kind: 'temperature', width: 58 },
+];
+
+const arrangementWords: Record<CircuitResult['arrangement'], string> = {
+  counterflow: 'counterflow',
+  parallel: 'parallel flow',
+  mixed: 'mixed',
+  'single-row': 'single row',
+};
+
+function cell(c: CircuitResult, key: string, system: UnitSystem): string {
+  const n = (kind: QuantityKind, v: number | undefined) => (v === undefined ? '—' : formatQuantity(kind, v, system).text);
+  switch (key) {
+    case 'index':
+      return String(c.index);
+    case 'passes':
+      return String(c.passes);
+    case 'arrangement':
+      return arrangementWords[c.arrangement];
+    case 'flow':
+      return n('massFlow', c.massFlow_kg_s);
+    case 'velocity':
+      return n('velocity', c.velocity_m_s);
+    case 're':
+      return c.reynolds === undefined ? '—' : formatNumber(c.reynolds, 0);
+    case 'regime':
+      return c.regime ?? '—';
+    case 'dp':
+      return n('waterPressureDrop', c.pressureDrop_Pa);
+    case 'leaving':
+      return n('temperature', c.leavingTemperature_C);
+    default:
+      return '';
+  }
+}
+
+export function CircuitTable({ circuits, system, onSelect }: { circuits: CircuitResult[]; system: UnitSystem; onSelect: (index: number) => void }) {
+  const textCols = new Set(['arrangement', 'regime']);
+  return (
+    <ScrollView horizontal style={styles.tableScroll} contentContainerStyle={styles.table} testID="circuit-table">
+      <View>
+        <View style={[styles.tr, styles.th]}>
+          {COLS.map((col) => (
+            <View key={col.key} style={[{ width: col.width }, textCols.has(col.key) && styles.textCol]}>
+              <Text style={[type.caption, styles.thText, !textCols.has(col.key) && styles.right]}>{col.title}</Text>
+              <Text style={[type.caption, styles.unit, !textCols.has(col.key) && styles.right]}>{col.kind ? unitLabel(col.kind, system) : ' '}</Text>
+            </View>
+          ))}
+        </View>
+        {circuits.map((c) => (
+          <Pressable key={c.index} role="button" accessibilityLabel={`Show circuit ${c.index} on the sheet`} onPress={() => onSelect(c.index)} style={({ pressed }) => [styles.tr, pressed && { backgroundColor: colors.surfaceMuted }]} testID={`circuit-row-${c.index}`}>
+            {COLS.map((col) => (
+              <Text key={col.key} style={[textCols.has(col.key) ? [type.small, styles.textCol] : type.number, { width: col.width, color: colors.text }, !textCols.has(col.key) && styles.right]} numberOfLines={1}>
+                {cell(c, col.key, system)}
+              </Text>
+            ))}
+          </Pressable>
+        ))}
+      </View>
+    </ScrollView>
+  );
+}
+
+const severityTone = { critical: colors.danger, warning: colors.warning, info: colors.primary } as const;
+
+export function IssueList({
+  errors,
+  warnings,
+  onSelect,
+}: {
+  errors: TopologyError[];
+  warnings: ResultWarning[];
+  onSelect: (tubes: TubeRef[], circuits: number[]) => void;
+}) {
+  if (errors.length === 0 && warnings.length === 0) return <Text style={[type.small, { color: colors.textMuted }]}>No warnings.</Text>;
+  return (
+    <View style={styles.issues} testID="issue-list">
+      {errors.map((e, i) => (
+        <Pressable key={`e${i}`} role="button" onPress={() => onSelect(e.tubes ?? [], [])} style={[styles.issue, { borderLeftColor: colors.danger }]} testID={`error-${e.code}`} accessibilityLabel={`Error: ${e.message}. Show on the sheet`}>
+          <Text style={[type.smallStrong, { color: colors.danger }]}>Error</Text>
+          <Text style={[type.small, { color: colors.text }]}>{e.message}</Text>
+        </Pressable>
+      ))}
+      {warnings.map((w, i) => (
+        <Pressable key={`w${i}`} role="button" onPress={() => onSelect(w.tubes ?? [], w.circuits ?? [])} style={[styles.issue, { borderLeftColor: severityTone[w.severity] }]} testID={`warning-${w.code}`} accessibilityLabel={`${w.severity}: ${w.message}. Show on the sheet`}>
+          <Text style={[type.smallStrong, { color: severityTone[w.severity] }]}>{w.severity === 'critical' ? 'Critical' : w.severity === 'warning' ? 'Warning' : 'Note'}</Text>
+          <Text style={[type.small, { color: colors.text }]}>{w.message}</Text>
+        </Pressable>
+      ))}
+    </View>
+  );
+}
+
+function Section({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <View style={styles.section}>
+      <Text role="heading" aria-level={3} style={[type.smallStrong, styles.sectionTitle]}>
+        {title}
+      </Text>
+      {children}
+    </View>
+  );
+}
+
+export function ResultsPanel({
+  live,
+  system,
+  onSelectIssue,
+  onSelectCircuit,
+}: {
+  live: LiveSolve;
+  system: UnitSystem;
+  onSelectIssue: (tubes: TubeRef[], circuits: number[]) => void;
+  onSelectCircuit: (index: number) => void;
+}) {
+  const { topology, result, fresh, documentIssues } = live;
+  const invalid = !topology.valid || documentIssues.length > 0;
+  const warnings = fresh && result ? result.warnings : topology.warnings;
+  return (
+    <View style={styles.panel} testID="results-panel">
+      {documentIssues.length > 0 ? (
+        <Banner tone="error" title="Some values need fixing">{documentIssues.map((i) => i.message).join('; ')}</Banner>
+      ) : null}
+      {!topology.valid ? (
+        <Banner tone="error" title="The circuiting is not complete">{`${topology.errors.length} problem${topology.errors.length === 1 ? '' : 's'} on the sheet; fix them to see performance.`}</Banner>
+      ) : null}
+      {live.error && !invalid ? <Banner tone="error" title="The solve failed">{live.error}</Banner> : null}
+      {!invalid && result && result.valid ? (
+        <View style={[styles.stack, !fresh && styles.stale]} testID={fresh ? 'results-fresh' : 'results-stale'}>
+          {!fresh ? (
+            <Text style={[type.smallStrong, styles.staleTag]} testID="results-stale-tag">
+              Updating: these figures are for the previous drawing
+            </Text>
+          ) : null}
+          <Section title="Coil">
+            <Totals result={result} system={system} />
+          </Section>
+          <Section title="Circuits">
+            <CircuitTable circuits={result.circuits} system={system} onSelect={onSelectCircuit} />
+          </Section>
+          {result.turndown && result.turndown.length > 1 ? (
+            <Section title="Turndown">
+              <TurndownChart points={result.turndown} system={system} />
+            </Section>
+          ) : null}
+        </View>
+      ) : !invalid ? (
+        <Text style={[type.small, { color: colors.textMuted }]}>Solving…</Text>
+      ) : null}
+      <Section title={invalid ? 'Problems' : 'Warnings'}>
+        <IssueList errors={topology.errors} warnings={warnings} onSelect={onSelectIssue} />
+      </Section>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  panel: { gap: space.lg },
+  stack: { gap: space.lg },
+  stale: { opacity: 0.55 },
+  staleTag: { color: colors.warning },
+  section: { gap: space.sm },
+  sectionTitle: { color: colors.textMuted, textTransform: 'uppercase', letterSpacing: 0.6 },
+  figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  figure: { flexGrow: 1, flexBasis: 140, padding: space.sm, borderRadius: radius.sm, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.border },
+  figureValue: { textAlign: 'right', color: colors.text, fontSize: 16 },
+  tableScroll: { flexGrow: 0 },
+  table: { paddingBottom: space.xs },
+  tr: { flexDirection: 'row', gap: space.xs, paddingVertical: space.xs, borderBottomWidth: 1, borderBottomColor: colors.border, alignItems: 'center' },
+  th: { borderBottomColor: colors.borderStrong },
+  thText: { color: colors.text, fontWeight: '600' },
+  unit: { color: colors.textMuted },
+  right: { textAlign: 'right' },
+  textCol: { paddingLeft: space.sm },
+  issues: { gap: space.xs },
+  issue: { borderLeftWidth: 4, paddingLeft: space.sm, paddingVertical: space.xs, backgroundColor: colors.surface, borderRadius: 2 },
+});
