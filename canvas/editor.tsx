@@ -3,14 +3,15 @@
  * Results come in as props (the workspace fetches them); the editor only draws and dispatches commands.
  */
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import { Platform, StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
+import { Platform, Pressable, StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { colors, space, type } from '@/components/ui/theme';
 import { Sheet } from '@/components/ui/sheet';
-import type { SolveResult, TubeRef } from '@/lib/engine/types';
+import type { Bend, EndFace, SolveResult, TubeRef } from '@/lib/engine/types';
 import type { Topology } from '@/lib/engine/topology';
 import { sheetAnalysis, tubeTemperatures } from './analysis';
 import { viridis } from './colormap';
 import { buildDrawing, buildSheetLayout, tubeKey } from './render-model';
+import { activeFace, type Selection } from './session';
 import { shortcutFor, shortcutTable } from './shortcuts';
 import type { EditorStore } from './store';
 import { EditorToolbar } from './toolbar';
@@ -36,7 +37,7 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
   const session = useEditor(store, (s) => s.session);
   const canUndo = useEditor(store, (s) => s.past.length > 0);
   const canRedo = useEditor(store, (s) => s.future.length > 0);
-  const { zoom, panX, panY, dragTo } = useView(view, (s) => s);
+  const { zoom, panX, panY, dragTo, hover } = useView(view, (s) => s);
   const [dragFrom, setDragFrom] = useState<TubeRef | null>(null);
   const [temperatureOn, setTemperatureOn] = useState(false);
   const [helpOpen, setHelpOpen] = useState(false);
@@ -109,7 +110,16 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
     return () => window.removeEventListener('keydown', onKey);
   }, [keyboard, store, fit, gestures]);
 
-  const infoTube = session.selection?.kind === 'tube' ? session.selection.tube : session.pendingTube;
+  const infoTube =
+    session.selection?.kind === 'tube' ? session.selection.tube : session.selection?.kind === 'bend' ? null : (session.pendingTube ?? hover);
+  const readoutBend = useMemo(
+    () => selectedBend(session.selection, circuiting.bends, activeFace(session.face)),
+    [session.selection, circuiting.bends, session.face],
+  );
+  const onCrossover = useCallback(
+    (bend: BendRef, crossover: boolean) => store.getState().dispatch('setCrossover', { end: bend.end, a: bend.a, b: bend.b, crossover }),
+    [store],
+  );
   const showTemperature = temperatureOn && drawing.temperatureRange !== null;
 
   return (
@@ -140,10 +150,11 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
           onPointerMove: gestures.onPointerMove,
           onPointerUp: gestures.onPointerUp,
           onPointerCancel: gestures.onPointerCancel,
+          onPointerLeave: () => view.getState().setHover(null),
         } as object)}
       >
         <View style={[styles.wrapper, { transform: [{ translateX: panX }, { translateY: panY }, { scale: zoom }] }]}>
-          <TubeSheet layout={layout} drawing={drawing} pendingTube={session.pendingTube} dragFrom={dragFrom} dragTo={dragTo} />
+          <TubeSheet layout={layout} drawing={drawing} pendingTube={session.pendingTube} hover={hover} dragFrom={dragFrom} dragTo={dragTo} />
         </View>
         <Text style={[type.caption, styles.faceTag]} pointerEvents="none" testID="face-shown">
           {session.face === 'connection' ? 'Connection end' : session.face === 'opposite' ? 'Opposite end' : 'Both ends (opposite end faint)'}
@@ -152,7 +163,15 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
           <TemperatureLegend min={drawing.temperatureRange.min} max={drawing.temperatureRange.max} format={formatTemperature} />
         ) : null}
       </View>
-      <TubeReadout tube={infoTube} drawing={drawing} temperatures={temperatures} format={formatTemperature} />
+      <TubeReadout
+        tube={infoTube}
+        bend={session.tool === 'select' ? readoutBend : null}
+        bendPicked={session.selection?.kind === 'bend'}
+        drawing={drawing}
+        temperatures={temperatures}
+        format={formatTemperature}
+        onCrossover={onCrossover}
+      />
       {keyboard ? (
         <Sheet open={helpOpen} title="Keyboard shortcuts" onClose={() => setHelpOpen(false)} testID="shortcuts-sheet">
           {shortcutTable.map((s) => (
@@ -167,34 +186,73 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
   );
 }
 
+type BendRef = { end: EndFace; a: TubeRef; b: TubeRef; crossover?: boolean };
+
+const endWords: Record<EndFace, string> = { connection: 'connection end', opposite: 'opposite end' };
+const tubeWords = (t: TubeRef) => `row ${t.row} tube ${t.tube}`;
+
+/** The bend a selection points at: the picked bend, or the bend on the face being drawn at the picked tube. */
+function selectedBend(selection: Selection, bends: Bend[], face: EndFace): BendRef | null {
+  if (selection?.kind === 'bend') {
+    return bends.find((b) => b.end === selection.end && sameTubeEnds(b, selection.a, selection.b)) ?? null;
+  }
+  if (selection?.kind === 'tube') {
+    const t = selection.tube;
+    return bends.find((b) => b.end === face && (sameRef(b.a, t) || sameRef(b.b, t))) ?? null;
+  }
+  return null;
+}
+const sameRef = (x: TubeRef, y: TubeRef) => x.row === y.row && x.tube === y.tube;
+const sameTubeEnds = (b: Bend, a: TubeRef, c: TubeRef) => (sameRef(b.a, a) && sameRef(b.b, c)) || (sameRef(b.a, c) && sameRef(b.b, a));
+
 function TubeReadout({
   tube,
+  bend,
+  bendPicked,
   drawing,
   temperatures,
   format,
+  onCrossover,
 }: {
   tube: TubeRef | null;
+  /** A bend to offer the crossover mark for (Select tool), or null. */
+  bend: BendRef | null;
+  /** True when the bend itself was picked (not reached through a tube). */
+  bendPicked: boolean;
   drawing: ReturnType<typeof buildDrawing>;
   temperatures: ReturnType<typeof tubeTemperatures>;
   format: (c: number) => string;
+  onCrossover: (bend: BendRef, crossover: boolean) => void;
 }) {
-  if (!tube) {
-    return (
-      <Text style={[type.caption, styles.readout]} testID="tube-readout">
-        Tap a tube with Select to see its circuit and water temperatures.
-      </Text>
-    );
+  const parts: string[] = [];
+  if (tube) {
+    const key = tubeKey(tube);
+    const place = drawing.place.get(key);
+    const t = temperatures?.get(key);
+    parts.push(`Row ${tube.row}, tube ${tube.tube}`);
+    parts.push(place ? `circuit ${place.circuit}, pass ${place.pass}` : 'not in a complete circuit');
+    if (t?.waterIn_C !== undefined && t.waterOut_C !== undefined) parts.push(`water in ${format(t.waterIn_C)}, out ${format(t.waterOut_C)}`);
+  } else if (bend && bendPicked) {
+    parts.push(`Bend ${tubeWords(bend.a)} to ${tubeWords(bend.b)}, ${endWords[bend.end]}${bend.crossover ? ', crossover' : ''}`);
   }
-  const key = tubeKey(tube);
-  const place = drawing.place.get(key);
-  const t = temperatures?.get(key);
-  const parts = [`Row ${tube.row}, tube ${tube.tube}`];
-  parts.push(place ? `circuit ${place.circuit}, pass ${place.pass}` : 'not in a complete circuit');
-  if (t?.waterIn_C !== undefined && t.waterOut_C !== undefined) parts.push(`water in ${format(t.waterIn_C)}, out ${format(t.waterOut_C)}`);
+  const text = parts.length > 0 ? parts.join(' · ') : 'Tap a tube with Select to see its circuit and water temperatures; tap a bend to mark it as a crossover.';
   return (
-    <Text style={[type.small, styles.readout]} testID="tube-readout" accessibilityLiveRegion="polite">
-      {parts.join(' · ')}
-    </Text>
+    <View style={styles.readoutBar}>
+      <Text style={[parts.length > 0 ? type.small : type.caption, styles.readout]} testID="tube-readout" accessibilityLiveRegion="polite">
+        {text}
+      </Text>
+      {bend ? (
+        <Pressable
+          role="button"
+          onPress={() => onCrossover(bend, !bend.crossover)}
+          style={({ pressed }) => [styles.readoutButton, pressed && { backgroundColor: colors.border }]}
+          accessibilityLabel={`${bend.crossover ? 'Unmark' : 'Mark'} the bend ${tubeWords(bend.a)} to ${tubeWords(bend.b)} on the ${endWords[bend.end]} as a crossover`}
+          testID="toggle-crossover"
+        >
+          <Text style={[type.smallStrong, { color: colors.primary }]}>{bend.crossover ? 'Unmark crossover' : 'Mark as crossover'}</Text>
+        </Pressable>
+      ) : null}
+    </View>
   );
 }
 
@@ -221,7 +279,9 @@ const styles = StyleSheet.create({
   viewport: { flex: 1, minHeight: 240, overflow: 'hidden', position: 'relative', backgroundColor: '#FBFAF7', touchAction: 'none', cursor: 'crosshair' } as object,
   wrapper: { position: 'absolute', left: 0, top: 0, transformOrigin: '0 0' } as object,
   faceTag: { position: 'absolute', right: space.sm, top: space.sm, color: colors.textMuted, backgroundColor: 'rgba(255,255,255,0.85)', paddingHorizontal: space.xs },
-  readout: { paddingHorizontal: space.md, paddingVertical: space.sm, color: colors.text, backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.border },
+  readoutBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', columnGap: space.sm, paddingHorizontal: space.md, paddingVertical: space.xs, backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.border },
+  readout: { flexGrow: 1, flexShrink: 1, flexBasis: 200, paddingVertical: space.xs, color: colors.text },
+  readoutButton: { minHeight: 36, justifyContent: 'center', paddingHorizontal: space.sm, borderRadius: 4, borderWidth: 1, borderColor: colors.border },
   legend: { position: 'absolute', left: space.sm, bottom: space.sm, width: 200, padding: space.sm, backgroundColor: 'rgba(255,255,255,0.92)', borderRadius: 6, gap: space.xxs },
   legendBar: { flexDirection: 'row', height: 10, borderRadius: 2, overflow: 'hidden' },
   legendEnds: { flexDirection: 'row', justifyContent: 'space-between' },

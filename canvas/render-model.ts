@@ -127,6 +127,10 @@ export interface BendMark {
   invalid: boolean;
   /** Water-direction arrowhead at the middle of the bend. */
   arrow: string | null;
+  /** Marked as a crossover: drawn dashed, bowed out, with a bridge mark at its apex. */
+  crossover: boolean;
+  bridge: string | null;
+  selected: boolean;
 }
 
 export interface StubMark { key: string; kind: 'supply' | 'return'; end: EndFace; d: string; head: string; colour: string; faint: boolean; labelX: number; labelY: number }
@@ -157,6 +161,8 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
   const selectedTube = sel?.kind === 'tube' ? tubeKey(sel.tube) : null;
   // Tapping a tube selects it and, when it is in a circuit, brings that circuit forward.
   const selectedCircuit = sel?.kind === 'circuit' ? sel.circuit : selectedTube ? (place.get(selectedTube)?.circuit ?? null) : null;
+  const selectedBend = sel?.kind === 'bend' ? bendKey(sel.end, tubeKey(sel.a), tubeKey(sel.b)) : null;
+  const bendEnds = sel?.kind === 'bend' ? new Set([tubeKey(sel.a), tubeKey(sel.b)]) : null;
   const highlighted = sel?.kind === 'issue' ? new Set(sel.tubes.map(tubeKey)) : null;
   const issueCircuits = sel?.kind === 'issue' ? new Set(sel.circuits) : null;
   const showAllLabels = layout.rows * layout.tubesPerRow <= LABEL_TUBE_LIMIT;
@@ -205,7 +211,8 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
       y: s.y,
       fill,
       stroke: isError ? sheetColours.error : isWarning ? sheetColours.warning : p ? '#22313A' : sheetColours.unassigned,
-      strokeWidth: isError || isWarning || (highlighted?.has(s.key) ?? false) || selectedTube === s.key ? r * 0.32 : r * 0.12,
+      strokeWidth:
+        isError || isWarning || (highlighted?.has(s.key) ?? false) || selectedTube === s.key || (bendEnds?.has(s.key) ?? false) ? r * 0.32 : r * 0.12,
       dashed: !p && !isError,
       label: showLabel ? String(p!.pass) : null,
       labelColour,
@@ -226,9 +233,11 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
     const sameCircuit = ka !== undefined && kb !== undefined && ka.circuit === kb.circuit && Math.abs(ka.pass - kb.pass) === 1;
     const invalid = !sameCircuit && (errors.has(pa.key) || errors.has(pb.key));
     const [from, to] = sameCircuit && ka!.pass > kb!.pass ? [pb, pa] : [pa, pb];
-    const d = bendPath(from, to, b.crossover === true, r);
+    const crossover = b.crossover === true;
+    const d = bendPath(from, to, crossover, r);
+    const key = bendKey(b.end, pa.key, pb.key);
     bends.push({
-      key: `${b.end}:${pa.key}:${pb.key}`,
+      key,
       end: b.end,
       a: b.a,
       b: b.b,
@@ -236,7 +245,10 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
       colour: invalid ? sheetColours.error : sameCircuit ? circuitColour(ka!.circuit - 1) : '#4A5A60',
       faint,
       invalid,
-      arrow: sameCircuit ? arrowHead(from, to, r) : null,
+      arrow: sameCircuit ? arrowHead(from, to, r, crossover) : null,
+      crossover,
+      bridge: crossover ? bridgeMark(from, to, r) : null,
+      selected: selectedBend !== null && (selectedBend === key || selectedBend === bendKey(b.end, pb.key, pa.key)),
     });
   }
 
@@ -255,22 +267,75 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
   return { tubes, bends, stubs, place, temperatureRange: range };
 }
 
-/** A bend seen end-on: a straight band between centres; crossovers bow out so they read as a second layer. */
-function bendPath(p: { x: number; y: number }, q: { x: number; y: number }, crossover: boolean, r: number): string {
-  const f = (n: number) => n.toFixed(2);
-  if (!crossover) return `M${f(p.x)} ${f(p.y)}L${f(q.x)} ${f(q.y)}`;
+const bendKey = (end: EndFace, a: string, b: string) => `${end}:${a}:${b}`;
+
+type Pt = { x: number; y: number };
+
+/** How far a crossover bows out from the straight line, as a multiple of the tube radius. */
+const CROSSOVER_BOW = 2.2;
+
+/** Control point of a crossover's curve and its apex (the curve's midpoint), on the left of p→q. */
+function crossoverCurve(p: Pt, q: Pt, r: number) {
   const mx = (p.x + q.x) / 2;
   const my = (p.y + q.y) / 2;
   const len = Math.hypot(q.x - p.x, q.y - p.y) || 1;
   const nx = -(q.y - p.y) / len;
   const ny = (q.x - p.x) / len;
-  const bow = r * 2.2;
-  return `M${f(p.x)} ${f(p.y)}Q${f(mx + nx * bow)} ${f(my + ny * bow)} ${f(q.x)} ${f(q.y)}`;
+  const bow = r * CROSSOVER_BOW;
+  return { cx: mx + nx * bow, cy: my + ny * bow, apexX: mx + (nx * bow) / 2, apexY: my + (ny * bow) / 2, ux: (q.x - p.x) / len, uy: (q.y - p.y) / len, nx, ny };
 }
 
-function arrowHead(p: { x: number; y: number }, q: { x: number; y: number }, r: number): string {
-  const mx = (p.x + q.x) / 2;
-  const my = (p.y + q.y) / 2;
+/** A bend seen end-on: a straight band between centres; crossovers bow out so they read as a second layer. */
+function bendPath(p: Pt, q: Pt, crossover: boolean, r: number): string {
+  const f = (n: number) => n.toFixed(2);
+  if (!crossover) return `M${f(p.x)} ${f(p.y)}L${f(q.x)} ${f(q.y)}`;
+  const c = crossoverCurve(p, q, r);
+  return `M${f(p.x)} ${f(p.y)}Q${f(c.cx)} ${f(c.cy)} ${f(q.x)} ${f(q.y)}`;
+}
+
+/** The bridge mark of a crossover: a small hump over the curve's apex, the sign of one pipe passing over another. */
+function bridgeMark(p: Pt, q: Pt, r: number): string {
+  const f = (n: number) => n.toFixed(2);
+  const c = crossoverCurve(p, q, r);
+  const s = r * 0.9;
+  const x0 = c.apexX - c.ux * s;
+  const y0 = c.apexY - c.uy * s;
+  const x1 = c.apexX + c.ux * s;
+  const y1 = c.apexY + c.uy * s;
+  // sweep chosen so the hump bulges outward, away from the straight line between the tubes
+  return `M${f(x0)} ${f(y0)}A${f(s)} ${f(s)} 0 0 0 ${f(x1)} ${f(y1)}`;
+}
+
+/** The bend on a face nearest a point of the sheet (mm), within reach of its line or curve, or null. */
+export function hitBend(layout: SheetLayout, circuiting: Circuiting, end: EndFace, x: number, y: number): { end: EndFace; a: TubeRef; b: TubeRef } | null {
+  const reach = layout.tubeRadius * 0.9;
+  let best: { end: EndFace; a: TubeRef; b: TubeRef } | null = null;
+  let bestDist = reach;
+  for (const b of circuiting.bends) {
+    if (b.end !== end) continue;
+    const p = spotOf(layout, b.a);
+    const q = spotOf(layout, b.b);
+    if (!p || !q) continue;
+    // Sample the line or the crossover's curve; bends are short, 12 samples are plenty.
+    const c = b.crossover ? crossoverCurve(p, q, layout.tubeRadius) : null;
+    for (let i = 0; i <= 12; i++) {
+      const t = i / 12;
+      const px = c ? (1 - t) ** 2 * p.x + 2 * (1 - t) * t * c.cx + t * t * q.x : p.x + (q.x - p.x) * t;
+      const py = c ? (1 - t) ** 2 * p.y + 2 * (1 - t) * t * c.cy + t * t * q.y : p.y + (q.y - p.y) * t;
+      const d = Math.hypot(px - x, py - y);
+      if (d < bestDist) {
+        bestDist = d;
+        best = { end: b.end, a: b.a, b: b.b };
+      }
+    }
+  }
+  return best;
+}
+
+function arrowHead(p: Pt, q: Pt, r: number, crossover: boolean): string {
+  const c = crossover ? crossoverCurve(p, q, r) : null;
+  const mx = c ? c.apexX : (p.x + q.x) / 2;
+  const my = c ? c.apexY : (p.y + q.y) / 2;
   const len = Math.hypot(q.x - p.x, q.y - p.y) || 1;
   const ux = (q.x - p.x) / len;
   const uy = (q.y - p.y) / len;

@@ -10,6 +10,8 @@ export type FaceShown = EndFace | 'both';
 
 export type Selection =
   | { kind: 'tube'; tube: TubeRef }
+  /** A bend picked with Select (to mark or unmark it as a crossover). */
+  | { kind: 'bend'; end: EndFace; a: TubeRef; b: TubeRef }
   | { kind: 'circuit'; circuit: number }
   | { kind: 'issue'; tubes: TubeRef[]; circuits: number[] }
   | null;

@@ -93,16 +93,19 @@ const Tube = memo(function Tube({ look, r }: { look: TubeLook; r: number }) {
 
 const Bend = memo(function Bend({ bend, r }: { bend: BendMark; r: number }) {
   const width = bend.faint ? r * 0.35 : r * 0.8;
+  const id = `r${bend.a.row}-t${bend.a.tube}-r${bend.b.row}-t${bend.b.tube}`;
+  // Crossovers are dashed with long dashes (a second layer); broken bends use short ones.
+  const dash = bend.faint ? `${r * 0.5} ${r * 0.4}` : bend.invalid ? `${r * 0.6} ${r * 0.3}` : bend.crossover ? `${r * 1.1} ${r * 0.45}` : undefined;
   return (
-    <G opacity={bend.faint ? 0.35 : 1} pointerEvents="none" testID={`bend-${bend.end}-r${bend.a.row}-t${bend.a.tube}-r${bend.b.row}-t${bend.b.tube}`}>
-      <Path
-        d={bend.d}
-        stroke={bend.colour}
-        strokeWidth={width}
-        strokeLinecap="round"
-        fill="none"
-        strokeDasharray={bend.faint ? `${r * 0.5} ${r * 0.4}` : bend.invalid ? `${r * 0.6} ${r * 0.3}` : undefined}
-      />
+    <G opacity={bend.faint ? 0.35 : 1} pointerEvents="none" testID={`bend-${bend.end}-${id}`}>
+      {bend.selected ? <Path d={bend.d} stroke={sheetColours.selection} strokeWidth={width + r * 0.7} strokeLinecap="round" fill="none" opacity={0.45} /> : null}
+      <Path d={bend.d} stroke={bend.colour} strokeWidth={width} strokeLinecap="round" fill="none" strokeDasharray={dash} />
+      {bend.bridge ? (
+        <G testID={`crossover-${bend.end}-${id}`}>
+          <Path d={bend.bridge} stroke="#FFFFFF" strokeWidth={r * 0.55} fill="none" strokeLinecap="round" />
+          <Path d={bend.bridge} stroke={bend.faint ? bend.colour : '#0E2A33'} strokeWidth={r * 0.25} fill="none" strokeLinecap="round" />
+        </G>
+      ) : null}
       {bend.arrow && !bend.faint ? <Path d={bend.arrow} fill="#0E2A33" /> : null}
     </G>
   );
@@ -124,13 +127,16 @@ export interface TubeSheetProps {
   layout: SheetLayout;
   drawing: SheetDrawing;
   pendingTube: TubeRef | null;
+  hover: TubeRef | null;
   dragFrom: TubeRef | null;
   dragTo: { x: number; y: number } | null;
 }
 
-export function TubeSheet({ layout, drawing, pendingTube, dragFrom, dragTo }: TubeSheetProps) {
+/** Memoised: panning and zooming move the wrapper around it and never re-render the drawing. */
+export const TubeSheet = memo(function TubeSheet({ layout, drawing, pendingTube, hover, dragFrom, dragTo }: TubeSheetProps) {
   const r = layout.tubeRadius;
   const pending = pendingTube ? spotOf(layout, pendingTube) : undefined;
+  const hovered = hover ? spotOf(layout, hover) : undefined;
   const from = dragFrom ? spotOf(layout, dragFrom) : undefined;
   return (
     <Svg
@@ -156,10 +162,11 @@ export function TubeSheet({ layout, drawing, pendingTube, dragFrom, dragTo }: Tu
           <Stub key={s.key} stub={s} r={r} />
         ))}
       </G>
+      {hovered ? <Circle cx={hovered.x} cy={hovered.y} r={r * 1.25} fill="none" stroke={sheetColours.selection} strokeWidth={r * 0.12} opacity={0.6} pointerEvents="none" /> : null}
       {pending ? <Circle cx={pending.x} cy={pending.y} r={r * 1.35} fill="none" stroke={sheetColours.pending} strokeWidth={r * 0.3} testID="pending-tube" pointerEvents="none" /> : null}
       {from && dragTo ? (
         <Line x1={from.x} y1={from.y} x2={dragTo.x} y2={dragTo.y} stroke={sheetColours.pending} strokeWidth={r * 0.5} strokeLinecap="round" opacity={0.8} pointerEvents="none" />
       ) : null}
     </Svg>
   );
-}
+});

@@ -3,10 +3,10 @@
  * to pan, two-finger pinch to zoom, wheel to zoom. A bend drawn by dragging is one gesture in the history; a drag
  * that ends anywhere but on another tube, or is interrupted, is cancelled and leaves nothing.
  */
-import { useCallback, useEffect, useRef, type RefObject } from 'react';
+import { useCallback, useEffect, useMemo, useRef, type RefObject } from 'react';
 import { Platform } from 'react-native';
 import type { TubeRef } from '@/lib/engine/types';
-import { hitTube, type SheetLayout } from './render-model';
+import { hitBend, hitTube, type SheetLayout } from './render-model';
 import { activeFace } from './session';
 import type { EditorStore } from './store';
 import type { ViewStore } from './view-store';
@@ -14,14 +14,14 @@ import { PX_PER_MM } from './tube-sheet';
 
 type Mode =
   | { kind: 'none' }
-  | { kind: 'pan'; x0: number; y0: number; panX0: number; panY0: number; moved: boolean; tube: TubeRef | null }
+  | { kind: 'pan'; x0: number; y0: number; panX0: number; panY0: number; moved: boolean; tube: TubeRef | null; at: { x: number; y: number } }
   | { kind: 'draw'; from: TubeRef; x0: number; y0: number; moved: boolean }
   | { kind: 'pinch'; dist0: number; zoom0: number; midX0: number; midY0: number; panX0: number; panY0: number };
 
 /** Pointer movement (px) under which a press counts as a tap. */
 const TAP_SLOP = 6;
 
-interface PointerLike { pointerId: number; clientX: number; clientY: number; currentTarget: unknown }
+interface PointerLike { pointerId: number; clientX: number; clientY: number; currentTarget: unknown; pointerType?: string }
 
 const sameTube = (a: TubeRef, b: TubeRef) => a.row === b.row && a.tube === b.tube;
 
@@ -52,13 +52,15 @@ export function useSheetGestures(
   );
 
   const tap = useCallback(
-    (tube: TubeRef | null) => {
+    (tube: TubeRef | null, at?: { x: number; y: number }) => {
       const s = store.getState();
       const { tool, face, pendingTube } = s.session;
       const end = activeFace(face);
       if (!tube) {
         s.setPendingTube(null);
-        s.select(null);
+        // With Select, a tap on a bend's line picks the bend (to mark it as a crossover).
+        const bend = tool === 'select' && at ? hitBend(layout, s.document.circuiting, end, at.x, at.y) : null;
+        s.select(bend ? { kind: 'bend', ...bend } : null);
         return;
       }
       switch (tool) {
@@ -82,7 +84,7 @@ export function useSheetGestures(
           break;
       }
     },
-    [store],
+    [layout, store],
   );
 
   const reset = useCallback(() => {
@@ -120,7 +122,7 @@ export function useSheetGestures(
         store.getState().beginGesture('Draw bend');
         mode.current = { kind: 'draw', from: tube, x0: p.x, y0: p.y, moved: false };
       } else {
-        mode.current = { kind: 'pan', x0: p.x, y0: p.y, panX0: v.panX, panY0: v.panY, moved: false, tube };
+        mode.current = { kind: 'pan', x0: p.x, y0: p.y, panX0: v.panX, panY0: v.panY, moved: false, tube, at: s };
       }
     },
     [layout, local, store, toSheet, view, onDragChange],
@@ -128,7 +130,14 @@ export function useSheetGestures(
 
   const onPointerMove = useCallback(
     (e: PointerLike) => {
-      if (!pointers.current.has(e.pointerId)) return;
+      if (!pointers.current.has(e.pointerId)) {
+        // No button down: a mouse hovering (touch has no hover).
+        if (e.pointerType === 'mouse') {
+          const s = toSheet(local(e));
+          view.getState().setHover(hitTube(layout, s.x, s.y));
+        }
+        return;
+      }
       const p = local(e);
       pointers.current.set(e.pointerId, p);
       const m = mode.current;
@@ -152,7 +161,7 @@ export function useSheetGestures(
         v.setView({ zoom, panX: midX - (m.midX0 - m.panX0) * k, panY: midY - (m.midY0 - m.panY0) * k });
       }
     },
-    [local, toSheet, view, onDragChange],
+    [layout, local, toSheet, view, onDragChange],
   );
 
   const onPointerUp = useCallback(
@@ -179,7 +188,7 @@ export function useSheetGestures(
           s.cancelGesture();
         }
       } else if (m.kind === 'pan' && !m.moved) {
-        tap(m.tube);
+        tap(m.tube, m.at);
       }
       void p;
       reset();
@@ -219,5 +228,5 @@ export function useSheetGestures(
     store.getState().select(null);
   }, [reset, store]);
 
-  return { onPointerDown, onPointerMove, onPointerUp, onPointerCancel, cancel };
+  return useMemo(() => ({ onPointerDown, onPointerMove, onPointerUp, onPointerCancel, cancel }), [onPointerDown, onPointerMove, onPointerUp, onPointerCancel, cancel]);
 }

@@ -3,6 +3,7 @@
  * saved with the document (ARCHITECTURE.md section 4). Pan and zoom transform a wrapper, not the SVG viewBox.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
+import type { TubeRef } from '@/lib/engine/types';
 
 export interface ViewState {
   zoom: number;
@@ -10,6 +11,9 @@ export interface ViewState {
   panY: number;
   /** End of the bend being dragged, in sheet millimetres, or null. */
   dragTo: { x: number; y: number } | null;
+  /** Tube under the mouse (wide screens), or null. */
+  hover: TubeRef | null;
+  setHover(tube: TubeRef | null): void;
   setView(view: Partial<Pick<ViewState, 'zoom' | 'panX' | 'panY'>>): void;
   setDragTo(point: { x: number; y: number } | null): void;
   /** Zoom by a factor about a point of the viewport (px), keeping that point still. */
@@ -27,6 +31,12 @@ export function createViewStore(): ViewStore {
     panX: 0,
     panY: 0,
     dragTo: null,
+    hover: null,
+    setHover(tube) {
+      const h = get().hover;
+      if (h === tube || (h && tube && h.row === tube.row && h.tube === tube.tube)) return;
+      set({ hover: tube });
+    },
     setView: (view) => set(view),
     setDragTo: (dragTo) => set({ dragTo }),
     zoomAbout(factor, px, py) {

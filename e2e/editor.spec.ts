@@ -67,7 +67,14 @@ test('draw, break, undo, generate, switch units and reload a coil', async ({ pag
   await bend(page, [2, 2], [2, 1]);
   await bend(page, [1, 1], [1, 2]);
   await bend(page, [2, 4], [2, 3]);
-  await bend(page, [1, 3], [1, 4]);
+  // This one by dragging from one tube to the other (one gesture, one undo step).
+  const from = (await tube(page, 1, 3).boundingBox())!;
+  const to = (await tube(page, 1, 4).boundingBox())!;
+  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(to.x + to.width / 2, to.y + to.height / 2, { steps: 8 });
+  await page.mouse.up();
+  await expect(page.getByTestId('bend-opposite-r1-t3-r1-t4')).toBeAttached();
   await page.getByTestId('face-connection').click();
   await bend(page, [2, 1], [1, 1]);
   await bend(page, [2, 3], [1, 3]);
@@ -156,8 +163,8 @@ test('draw, break, undo, generate, switch units and reload a coil', async ({ pag
   const list = page.getByTestId('coil-list');
   await expect(list).toContainText('4 rows × 24 tubes high');
   await expect(list).toContainText('24 circuits');
-  await expect(list).toContainText(/[\d.]+ kW/);
-  await expect(list).toContainText(/[\d.]+ kPa water/);
+  await expect(list).toContainText(/capacity [\d.]+ kW/);
+  await expect(list).toContainText(/water pressure drop [\d.]+ kPa/);
   await expectNoSidewaysScroll(page);
   await snap(page, testInfo, '09-coil-list');
   await page.getByTestId('coil-duplicate').click();

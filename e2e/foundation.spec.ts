@@ -184,3 +184,35 @@ test('with two teams the picker switches team and remembers the choice', async (
   await expect(page.getByTestId('projects-empty')).toBeVisible();
   await expect(page.getByTestId('team-picker')).toContainText("Sela Brandt's team");
 });
+
+test('forgot password: the mailed reset link sets a new password', async ({ page, request, baseURL }, testInfo) => {
+  const email = uniqueEmail(testInfo, 'forgetful');
+  await signUpByApi(request, baseURL!, { name: 'Arvo Penhallow', email, password: PASSWORD });
+
+  await page.goto('/sign-in');
+  await page.getByRole('link', { name: 'Forgot your password?' }).click();
+  await page.getByTestId('forgot-email').fill(email);
+  await page.getByTestId('forgot-submit').click();
+  await expect(page.getByTestId('forgot-sent')).toContainText(email);
+  await shot(page, testInfo, '16-forgot-sent');
+
+  // Read the captured mail through the API (the request context is signed in as the same user).
+  const outbox = await (await request.get('/api/dev/outbox')).json();
+  const mail = outbox.messages.find((m: { to: string; subject: string }) => m.to === email && /reset/i.test(m.subject));
+  const resetPath = /\/reset-password\?token=[\w-]+/.exec(mail.text)![0];
+
+  await page.goto(resetPath);
+  await page.getByTestId('reset-password').fill('short');
+  await page.getByTestId('reset-submit').click();
+  await expect(page.getByTestId('reset-password-error')).toContainText('10 characters');
+  const newPassword = 'return-bend-77?';
+  await page.getByTestId('reset-password').fill(newPassword);
+  await page.getByTestId('reset-confirm').fill(newPassword);
+  await page.getByTestId('reset-submit').click();
+  await expect(page.getByTestId('reset-done')).toBeVisible();
+  await shot(page, testInfo, '17-reset-done');
+
+  await page.getByRole('link', { name: 'Go to sign in' }).click();
+  await signInInUi(page, email, newPassword);
+  await expect(page.getByTestId('projects-screen')).toBeVisible();
+});

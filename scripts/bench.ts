@@ -148,6 +148,17 @@ export function engineBenchmarks(): Timing[] {
   const passes = new Set(traceCircuits(big).circuits.map((c) => c.passes));
   if (passes.size < 2 || !traceCircuits(big).valid) throw new Error('bench coil should have valid circuits of unequal length');
   out.push(measure('topology + hydraulics, 12 rows x 60 high, 40 unequal circuits', () => topologyAndHydraulics(big), 30, 5, 5));
+  out.push(measure('  of which topology (traceCircuits)', () => traceCircuits(big), 30, 5));
+  const traced = traceCircuits(big);
+  const bigDerived = deriveGeometry(big.geometry);
+  const bigFluid = big.conditions.fluid;
+  out.push(
+    measure('  of which hydraulics (flow split, ΔP, Re)', () =>
+      solveCoilHydraulics(big.geometry, bigDerived, traced.circuits, isothermalTemperatures(traced.circuits, bigFluid.inletTemperature_C), bigFluid.massFlow_kg_s, cachedFluidProperties(bigFluid), 'rennels'),
+    30,
+    5,
+    ),
+  );
   const wet8 = chilledWaterCoil(8, 40, 40);
   out.push(measure('thermal solve, 8 x 40 wet chilled water, 6 segments', () => thermalSolve(wet8), 15, 3, 50));
   out.push(measure('thermal solve, 12 x 60 wet chilled water, 6 segments', () => thermalSolve(chilledWaterCoil(12, 60, 60)), 7, 2));

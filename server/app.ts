@@ -18,6 +18,7 @@ import { attachmentRouter } from '@/server/routes/attachments';
 import { exportRouter } from '@/server/routes/exports';
 import { reviewApiRouter } from '@/server/routes/review-api';
 import { createServices } from '@/server/services';
+import { storageOrigin } from '@/server/storage/object-store';
 import type { SolveFn } from '@/server/services/context';
 
 export interface AppDeps {
@@ -57,8 +58,9 @@ export function createApp(deps: AppDeps): Express {
       strictTransportSecurity: httpsOnly,
       contentSecurityPolicy: {
         directives: {
-          // blob: for previews of picked images and generated drawings in the browser.
-          imgSrc: ["'self'", 'data:', 'blob:'],
+          // blob: for previews of picked images and generated drawings in the browser; the object store for
+          // attachment thumbnails, which are served through short-lived presigned links.
+          imgSrc: ["'self'", 'data:', 'blob:', storageOrigin(config.s3)],
           ...(httpsOnly ? {} : { upgradeInsecureRequests: null }),
         },
       },

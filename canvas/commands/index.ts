@@ -5,6 +5,7 @@
 import type { CoilDocument } from '@/lib/engine/types';
 import { addBend } from './add-bend';
 import { removeBend } from './remove-bend';
+import { setCrossover } from './set-crossover';
 import { toggleStub } from './toggle-stub';
 import { eraseTubeEnd } from './erase-tube-end';
 import { setGeometry } from './set-geometry';
@@ -15,6 +16,7 @@ import { renameCoil } from './rename-coil';
 export const commands = {
   addBend,
   removeBend,
+  setCrossover,
   toggleStub,
   eraseTubeEnd,
   setGeometry,
@@ -29,6 +31,7 @@ export type CommandArgs<N extends CommandName> = Parameters<(typeof commands)[N]
 export const commandLabels: Record<CommandName, string> = {
   addBend: 'Draw bend',
   removeBend: 'Remove bend',
+  setCrossover: 'Crossover',
   toggleStub: 'Header stub',
   eraseTubeEnd: 'Erase',
   setGeometry: 'Geometry',

@@ -23,8 +23,8 @@ import { NewCoilSheet } from './new-coil-sheet';
 function coilFigures(c: CoilListItem, system: UnitSystem): string[] {
   const parts = [`${c.rows} rows × ${c.tubesPerRow} tubes high`];
   if (c.circuitCount != null) parts.push(`${c.circuitCount} circuit${c.circuitCount === 1 ? '' : 's'}`);
-  parts.push(c.capacity_W != null ? formatQuantity('power', c.capacity_W, system).label : 'no capacity yet');
-  if (c.waterPressureDrop_Pa != null) parts.push(`${formatQuantity('waterPressureDrop', c.waterPressureDrop_Pa, system).label} water`);
+  parts.push(c.capacity_W != null ? `capacity ${formatQuantity('power', c.capacity_W, system).label}` : 'no capacity yet');
+  if (c.waterPressureDrop_Pa != null) parts.push(`water pressure drop ${formatQuantity('waterPressureDrop', c.waterPressureDrop_Pa, system).label}`);
   if (c.warningCount != null) parts.push(`${c.warningCount} warning${c.warningCount === 1 ? '' : 's'}`);
   return parts;
 }

@@ -132,17 +132,20 @@ function ReviewBody({ token, review }: { token: string; review: ReviewReply }) {
     </>
   );
 
+  const top = (
+    <Card title="About this version">
+      <Text style={[type.body, { color: colors.text }]} testID="review-message">
+        {version.message}
+      </Text>
+      <Text style={[type.caption, { color: colors.textMuted }]}>
+        {`Saved ${formatDateTime(version.createdAt)}${version.author ? ` by ${version.author}` : ''}${review.expiresAt ? ` · link open until ${formatDate(review.expiresAt)}` : ''}`}
+      </Text>
+      <UnitToggle value={units} onChange={setUnits} />
+    </Card>
+  );
+
   const aside = (
     <>
-      <Card title="About this version">
-        <Text style={[type.body, { color: colors.text }]} testID="review-message">
-          {version.message}
-        </Text>
-        <Text style={[type.caption, { color: colors.textMuted }]}>
-          {`Saved ${formatDateTime(version.createdAt)}${version.author ? ` by ${version.author}` : ''}${review.expiresAt ? ` · link open until ${formatDate(review.expiresAt)}` : ''}`}
-        </Text>
-        <UnitToggle value={units} onChange={setUnits} />
-      </Card>
       <Card title="Comments" testID="review-comments">
         {review.allowComments ? (
           <>
@@ -169,7 +172,7 @@ function ReviewBody({ token, review }: { token: string; review: ReviewReply }) {
           {`${version.coilName}, version ${version.number}`}
         </Text>
       </View>
-      <SplitLayout main={main} aside={aside} />
+      <SplitLayout top={top} main={main} aside={aside} />
     </Frame>
   );
 }

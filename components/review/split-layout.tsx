@@ -1,14 +1,18 @@
-/** Two columns on wide screens (the sheet and results beside the discussion), one stacked column on phones. */
+/**
+ * Two columns on wide screens (the sheet and results beside the discussion), one stacked column on phones. `top`
+ * (the version's message) heads the page on phones and the side column on wide screens.
+ */
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { space } from '@/components/ui/theme';
 import { useBreakpoint } from '@/components/ui/use-breakpoint';
 
-export function SplitLayout({ main, aside }: { main: ReactNode; aside: ReactNode }) {
+export function SplitLayout({ top, main, aside }: { top?: ReactNode; main: ReactNode; aside: ReactNode }) {
   const { isWide } = useBreakpoint();
   if (!isWide) {
     return (
       <View style={styles.stack}>
+        {top}
         {main}
         {aside}
       </View>
@@ -17,7 +21,10 @@ export function SplitLayout({ main, aside }: { main: ReactNode; aside: ReactNode
   return (
     <View style={styles.row}>
       <View style={styles.main}>{main}</View>
-      <View style={styles.aside}>{aside}</View>
+      <View style={styles.aside}>
+        {top}
+        {aside}
+      </View>
     </View>
   );
 }

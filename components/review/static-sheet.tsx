@@ -14,9 +14,7 @@ import type { CoilDocument, SolveResult, TubeRef } from '@/lib/engine/types';
 import { traceCircuits } from '@/lib/engine/topology';
 import type { CommentPin } from '@/lib/schema/api-versions';
 import { pinAnchor, type ChangeTone, type SheetHighlight } from '@/components/review/sheet-marks';
-
-/** Largest drawing scale, screen pixels per sheet millimetre (the editor's zoom 1). */
-const MAX_PX_PER_MM = 1.25;
+import { sheetScale } from '@/components/review/sheet-scale';
 
 export const TONE_COLOURS: Record<ChangeTone, string> = {
   added: palette.green700,
@@ -56,7 +54,7 @@ export function StaticSheet({ document, result = null, highlights = [], markers 
     return { layout, analysis, drawing };
   }, [document, result, selectedTube]);
   const { layout, drawing, analysis } = model;
-  const scale = width > 0 ? Math.min(MAX_PX_PER_MM, width / layout.width) : 0;
+  const scale = sheetScale(width, layout.width, layout.height);
   const r = layout.tubeRadius;
 
   return (
@@ -203,9 +201,9 @@ function Marker({
   if (spots.length === 0) return null;
   const x0 = spots.reduce((sum, s) => sum + s.x, 0) / spots.length;
   const y0 = spots.reduce((sum, s) => sum + s.y, 0) / spots.length;
-  const r = Math.max(layout.tubeRadius * 0.85, 5);
-  const cx = x0 - layout.tubeRadius * 0.9 - k * r * 1.6;
-  const cy = y0 - layout.tubeRadius * 0.9;
+  const r = Math.max(layout.tubeRadius * 1.15, 6);
+  const cx = x0 - layout.tubeRadius * 1.2 - k * r * 1.8;
+  const cy = y0 - layout.tubeRadius * 1.2;
   const fill = marker.resolved ? palette.slate500 : colors.accent;
   return (
     <G testID={testID} pointerEvents="none" opacity={marker.resolved ? 0.75 : 1}>

@@ -4,6 +4,7 @@ import { useEffect, useState } from 'react';
 import { Text } from 'react-native';
 import { ME_QUERY_KEY, updateMe } from '@/lib/api/me';
 import { personNameSchema, type MeReply, type UnitSystem } from '@/lib/schema/api-auth';
+import { NotificationSettings } from '@/components/notifications/notification-settings';
 import { useMe } from '@/components/shell/use-me';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -86,6 +87,7 @@ export function SettingsScreen() {
       <PageHeader title="Settings" subtitle={me.data ? `Signed in as ${me.data.user.email}` : undefined} />
       <NameForm />
       <UnitsForm />
+      <NotificationSettings />
     </Screen>
   );
 }

@@ -1,6 +1,6 @@
 /** Words and units for versions: dates, decision names, the compared result figures. */
 import type { DecisionStatus, ResultDifference } from '@/lib/schema/api-versions';
-import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from '@/lib/units';
+import { formatNumber, formatQuantity, UNITS, type QuantityKind, type UnitSystem } from '@/lib/units';
 
 export function formatDateTime(iso: string): string {
   const d = new Date(iso);
@@ -47,14 +47,20 @@ export function formatResultValue(key: string, value: number | null, system: Uni
 
 /**
  * The difference b − a with its sign and unit. Temperatures differ by a temperature difference (K or °F), never
- * by an absolute temperature; "no change" when equal at the shown precision.
+ * by an absolute temperature; "no change" only when the difference is nil at two decimals more than the values.
  */
 export function formatResultDifference(row: ResultDifference, system: UnitSystem): string {
   if (row.difference === null) return '—';
+  if (row.difference === 0) return 'no change';
   const f = RESULT_FIGURES[row.key];
   const kind = f ? (f.differenceKind ?? f.kind) : null;
-  const formatted = kind === null ? { text: formatNumber(row.difference, 0), unit: '' } : formatQuantity(kind, row.difference, system);
-  if (/^0(\.0*)?$/.test(formatted.text)) return 'no change';
-  const sign = row.difference > 0 ? '+' : '';
-  return `${sign}${formatted.text}${formatted.unit ? ` ${formatted.unit}` : ''}`;
+  if (kind === null) return `${row.difference > 0 ? '+' : ''}${formatNumber(row.difference, 0)}`;
+  // A small difference gets up to two more decimals than the values, so two values that read differently never
+  // show "no change" between them.
+  const base = UNITS[kind][system].decimals;
+  for (let digits = base; digits <= base + 2; digits++) {
+    const q = formatQuantity(kind, row.difference, system, { digits });
+    if (!/^-?0(\.0*)?$/.test(q.text)) return `${row.difference > 0 ? '+' : ''}${q.text} ${q.unit}`;
+  }
+  return 'no change';
 }

@@ -1,7 +1,7 @@
 /**
  * "Save version": asks for a message, snapshots the coil's draft as the next numbered version and says which
- * number it got. The draft must be saved on the server first; the workspace autosaves, so pass `disabled` while
- * a save is pending so the version never misses the latest edit.
+ * number it got. Shown only to owners and designers of the coil's team. The version is made from the draft on the
+ * server; the workspace autosaves, so pass `disabled` while a save is pending so it never misses the latest edit.
  */
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
@@ -15,6 +15,7 @@ import { Row, Stack } from '@/components/ui/screen';
 import { Sheet } from '@/components/ui/sheet';
 import { TextField } from '@/components/ui/text-field';
 import { colors, type } from '@/components/ui/theme';
+import { useCoilAccess } from '@/components/versions/use-coil-access';
 
 export function SaveVersionButton({
   coilId,
@@ -26,6 +27,7 @@ export function SaveVersionButton({
   onSaved?: (version: VersionListItem) => void;
 }) {
   const queryClient = useQueryClient();
+  const { canEdit } = useCoilAccess(coilId);
   const [open, setOpen] = useState(false);
   const [message, setMessage] = useState('');
   const [error, setError] = useState<string | null>(null);
@@ -55,6 +57,7 @@ export function SaveVersionButton({
     setError(null);
     save.reset();
   };
+  if (!canEdit) return null;
   return (
     <>
       <Button label="Save version" variant="secondary" size="sm" onPress={() => setOpen(true)} disabled={disabled} testID="save-version" />

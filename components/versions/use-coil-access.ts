@@ -3,7 +3,7 @@
  * screens show only the actions the role may take (DEVELOPERS.md, Roles); the server checks again.
  */
 import { useQuery } from '@tanstack/react-query';
-import { coilKeys, getCoil } from '@/lib/api/coils';
+import { getCoil } from '@/lib/api/coils';
 import { getProject } from '@/lib/api/projects';
 import type { Role } from '@/lib/schema/api-auth';
 import { useMe } from '@/components/shell/use-me';
@@ -20,7 +20,8 @@ export interface CoilAccess {
 
 export function useCoilAccess(coilId: string | null | undefined): CoilAccess {
   const me = useMe();
-  const coil = useQuery({ queryKey: coilKeys.one(coilId ?? ''), queryFn: () => getCoil(coilId!), enabled: Boolean(coilId) });
+  // Its own key: the workspace caches the coil under coilKeys.one with its own rules (loaded once per visit).
+  const coil = useQuery({ queryKey: ['coil-access', coilId], queryFn: () => getCoil(coilId!), enabled: Boolean(coilId), staleTime: 60_000 });
   const projectId = coil.data?.projectId ?? null;
   const project = useQuery({ queryKey: ['project', projectId], queryFn: () => getProject(projectId!), enabled: Boolean(projectId) });
   const teamId = project.data?.teamId;

@@ -71,7 +71,8 @@ function VersionBody({ version }: { version: Awaited<ReturnType<typeof getVersio
     mutationFn: () => restoreVersion(version.id),
     onSuccess: () => {
       setConfirmRestore(false);
-      void queryClient.invalidateQueries({ queryKey: coilKeys.one(version.coilId) });
+      // The workspace must load the restored draft, not a copy cached before the restore.
+      queryClient.removeQueries({ queryKey: coilKeys.one(version.coilId) });
       if (access.projectId) router.push(`/projects/${encodeURIComponent(access.projectId)}/coils/${encodeURIComponent(version.coilId)}`);
     },
   });
@@ -100,16 +101,19 @@ function VersionBody({ version }: { version: Awaited<ReturnType<typeof getVersio
     </>
   );
 
+  const top = (
+    <Card title="Message">
+      <Text style={[type.body, { color: colors.text }]} testID="version-message">
+        {version.message}
+      </Text>
+      <Text style={[type.caption, { color: colors.textMuted }]}>
+        {`Saved ${formatDateTime(version.createdAt)}${version.author ? ` by ${version.author.name}` : ''} from draft revision ${version.draftRevision}`}
+      </Text>
+    </Card>
+  );
+
   const aside = (
     <>
-      <Card title="Message">
-        <Text style={[type.body, { color: colors.text }]} testID="version-message">
-          {version.message}
-        </Text>
-        <Text style={[type.caption, { color: colors.textMuted }]}>
-          {`Saved ${formatDateTime(version.createdAt)}${version.author ? ` by ${version.author.name}` : ''} from draft revision ${version.draftRevision}`}
-        </Text>
-      </Card>
       <DecisionPanel versionId={version.id} coilId={version.coilId} latest={version.latestDecision} canDecide={access.canDecide} />
       <Card title="Comments" testID="comments">
         {comments.query.error ? <Banner tone="error">{messageOf(comments.query.error)}</Banner> : null}
@@ -147,7 +151,7 @@ function VersionBody({ version }: { version: Awaited<ReturnType<typeof getVersio
           </Link>
         </Row>
       ) : null}
-      <SplitLayout main={main} aside={aside} />
+      <SplitLayout top={top} main={main} aside={aside} />
       <ConfirmSheet
         open={confirmRestore}
         title={`Restore version ${version.number}?`}

@@ -190,11 +190,47 @@ export function solveCircuitHydraulics(
   warm?: WarmStart,
 ): HydraulicsResult {
   const models = specs.map((s) => buildCircuitPressureModel(s, properties, bendMethod));
-  const split = splitFlowBetweenCircuits(
-    models.map((m) => (flow: number) => circuitPressureDrop_Pa(m, flow)),
+  // Circuits with identical tubes, bends and temperatures share one pressure-drop curve: split between groups
+  // (a group of k carries k times the flow of one member at the same ΔP), then share equally inside a group.
+  const groupOf = new Int32Array(models.length);
+  const groups: { model: CircuitPressureModel; count: number }[] = [];
+  const keyIndex = new Map<string, number>();
+  models.forEach((m, c) => {
+    const key = [
+      m.bendMethod,
+      m.inlet.density_kg_m3,
+      m.inlet.viscosity_Pa_s,
+      m.outlet.density_kg_m3,
+      m.outlet.viscosity_Pa_s,
+      m.tubeDensity.join(','),
+      m.tubeViscosity.join(','),
+      m.bendRadiusOverDiameter.join(','),
+      m.bendDensity.join(','),
+      m.bendViscosity.join(','),
+    ].join('|');
+    let g = keyIndex.get(key);
+    if (g === undefined) {
+      g = groups.length;
+      keyIndex.set(key, g);
+      groups.push({ model: m, count: 0 });
+    }
+    groups[g].count++;
+    groupOf[c] = g;
+  });
+  let groupWarm: { massFlows_kg_s: Float64Array; pressureDrop_Pa: number } | undefined;
+  if (warm && warm.massFlows_kg_s.length === models.length) {
+    const flows = new Float64Array(groups.length);
+    for (let c = 0; c < models.length; c++) flows[groupOf[c]] += warm.massFlows_kg_s[c];
+    groupWarm = { massFlows_kg_s: flows, pressureDrop_Pa: warm.pressureDrop_Pa };
+  }
+  const groupSplit = splitFlowBetweenCircuits(
+    groups.map((g) => (flow: number) => circuitPressureDrop_Pa(g.model, flow / g.count)),
     totalMassFlow_kg_s,
-    warm,
+    groupWarm,
   );
+  const perCircuit = new Float64Array(models.length);
+  for (let c = 0; c < models.length; c++) perCircuit[c] = groupSplit.massFlows_kg_s[groupOf[c]] / groups[groupOf[c]].count;
+  const split = { ...groupSplit, massFlows_kg_s: perCircuit };
   const circuits = models.map((model, c): CircuitHydraulics => {
     const m = split.massFlows_kg_s[c];
     const d = model.innerDiameter_m;

@@ -39,30 +39,46 @@ export function tabulatedSaturationCurve(pressure_Pa: number, lo_C: number, hi_C
     ws[i] = wsAt(t);
     dws[i] = (wsAt(t + d) - wsAt(t - d)) / (2 * d);
   }
-  const hermite = (y: Float64Array, dy: Float64Array, t: number): number => {
-    let i = Math.floor((t - t0) / step);
-    if (i >= n - 1) i = n - 2;
-    const s = (t - (t0 + i * step)) / step;
-    const s2 = s * s;
-    const s3 = s2 * s;
-    return (
-      (2 * s3 - 3 * s2 + 1) * y[i] + (s3 - 2 * s2 + s) * step * dy[i] + (-2 * s3 + 3 * s2) * y[i + 1] + (s3 - s2) * step * dy[i + 1]
-    );
+  // Each cell's cubic Hermite polynomial in s = (t − t_i)/step, stored as Horner coefficients c0 + s(c1 + s(c2 + s c3)).
+  const cubic = (y: Float64Array, dy: Float64Array): Float64Array => {
+    const c = new Float64Array(4 * (n - 1));
+    for (let i = 0; i < n - 1; i++) {
+      const y0 = y[i];
+      const y1 = y[i + 1];
+      const m0 = step * dy[i];
+      const m1 = step * dy[i + 1];
+      c[4 * i] = y0;
+      c[4 * i + 1] = m0;
+      c[4 * i + 2] = 3 * (y1 - y0) - 2 * m0 - m1;
+      c[4 * i + 3] = 2 * (y0 - y1) + m0 + m1;
+    }
+    return c;
+  };
+  const hCoef = cubic(h, dh);
+  const wCoef = cubic(ws, dws);
+  const invStep = 1 / step;
+  const evaluate = (c: Float64Array, t: number): number => {
+    const x = (t - t0) * invStep;
+    let i = Math.floor(x);
+    if (i > n - 2) i = n - 2;
+    const sv = x - i;
+    const k = 4 * i;
+    return c[k] + sv * (c[k + 1] + sv * (c[k + 2] + sv * c[k + 3]));
   };
   const inTable = (t: number) => t >= t0 && t <= tEnd;
-  const enthalpy = (t: number): number => (inTable(t) ? hermite(h, dh, t) : saturationEnthalpy_J_kg(t, pressure_Pa));
+  const enthalpy = (t: number): number => (inTable(t) ? evaluate(hCoef, t) : saturationEnthalpy_J_kg(t, pressure_Pa));
+  /** dh_s/dT of the interpolant, J/(kg K). */
   const slope = (t: number): number => {
-    let i = Math.floor((t - t0) / step);
-    if (i >= n - 1) i = n - 2;
-    const s = (t - (t0 + i * step)) / step;
-    const s2 = s * s;
-    return (
-      ((6 * s2 - 6 * s) * h[i]) / step + (3 * s2 - 4 * s + 1) * dh[i] + ((-6 * s2 + 6 * s) * h[i + 1]) / step + (3 * s2 - 2 * s) * dh[i + 1]
-    );
+    const x = (t - t0) * invStep;
+    let i = Math.floor(x);
+    if (i > n - 2) i = n - 2;
+    const sv = x - i;
+    const k = 4 * i;
+    return (hCoef[k + 1] + sv * (2 * hCoef[k + 2] + 3 * sv * hCoef[k + 3])) * invStep;
   };
   return {
     enthalpy_J_kg: enthalpy,
-    humidityRatio: (t) => (inTable(t) ? hermite(ws, dws, t) : wsAt(t)),
+    humidityRatio: (t) => (inTable(t) ? evaluate(wCoef, t) : wsAt(t)),
     temperatureFromEnthalpy_C: (target, near) => {
       if (!(target >= h[0] && target <= h[n - 1])) return saturationTemperatureFromEnthalpy_C(target, pressure_Pa);
       // Warm start: Newton from a nearby temperature (the previous sweep's), kept inside the table.
@@ -87,7 +103,7 @@ export function tabulatedSaturationCurve(pressure_Pa: number, lo_C: number, hi_C
       const hi = lo + step;
       let t = lo + (step * (target - h[a])) / (h[b] - h[a]);
       for (let k = 0; k < 8; k++) {
-        const f = hermite(h, dh, t) - target;
+        const f = evaluate(hCoef, t) - target;
         const next = t - f / slope(t);
         t = next < lo ? lo : next > hi ? hi : next;
         if (Math.abs(f) < 1e-10 * Math.abs(target) + 1e-9) break;

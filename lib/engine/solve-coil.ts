@@ -71,7 +71,7 @@ const HYDRAULIC_METHODS: MethodNote[] = [
 ];
 
 const THERMAL_METHODS = (segments: number, airMixing: 'strip' | 'staggered', fin: 'plain' | 'wavy'): MethodNote[] => [
-  { topic: 'tube-by-tube solver', method: `${segments} segments per tube; water followed along each circuit; air ${airMixing === 'strip' ? 'in strips (each tube position keeps its own air)' : 'mixed half-and-half between the two upstream tubes (staggered, half-pitch bands)'}; Gauss–Seidel sweeps to 1e-7 K, outer iterations until the capacity changes < 0.01 %`, source: 'ENGINEERING.md 3.12' },
+  { topic: 'tube-by-tube solver', method: `${segments} segments per tube; water followed along each circuit; air ${airMixing === 'strip' ? 'in strips (each tube position keeps its own air)' : 'mixed half-and-half between the two upstream tubes (staggered, half-pitch bands)'}; Gauss–Seidel sweeps to 1e-5 K, outer iterations until the capacity changes < 0.01 %`, source: 'ENGINEERING.md 3.12' },
   { topic: 'dry segments', method: 'water mixed, air unmixed segment effectiveness P_w = 1 − exp[−(C_a/C_w)(1 − e^(−UA/C_a))]', source: 'ENGINEERING.md 3.10; Incropera & DeWitt ε-NTU relations' },
   { topic: 'wet segments', method: 'enthalpy-based ε-NTU (BKM) per segment, c_s between the segment water temperatures; wet when the surface temperature at the segment air inlet is below the local dew point; a segment flipping 5 times is frozen', source: 'Braun, Klein & Mitchell (1989) ASHRAE Trans. 95(2); ENGINEERING.md v1 decision 11' },
   { topic: 'saturation curve', method: 'ASHRAE psychrometric equations tabulated once per solve on a 0.1 K grid with cubic Hermite interpolation (our speed choice)', source: 'ASHRAE Handbook—Fundamentals 2017 ch. 1 (psychrolib)' },
@@ -84,7 +84,7 @@ const THERMAL_METHODS = (segments: number, airMixing: 'strip' | 'staggered', fin
   { topic: 'fin efficiency', method: 'Schmidt equivalent circular fin; wet fins with the Threlkeld parameter, c_s,f taken between the mean water temperature and the entering dew point (our choice)', source: 'Schmidt, T.E. (1949) Refrig. Eng. 57:351; Threlkeld, J.L. (1970)' },
   { topic: 'air properties and flow', method: 'air mass flow = entering moist density × face velocity × face area; transport properties at the mean of entering and leaving air', source: 'ENGINEERING.md v1 decisions 1 and 13; US Standard Atmosphere 1976 (Sutherland)' },
   { topic: 'air pressure drop', method: 'Kays & London core equation with Wang f; condensing coils: dry value × 1.25 (an estimate)', source: 'Kays, W.M., London, A.L. (1984) Compact Heat Exchangers; ENGINEERING.md v1 decision 9' },
-  { topic: 'turndown', method: 'every flow fraction 0.1–1.0 and the minimum flow fraction solved in full (thermal and hydraulic) with the entering temperatures held', source: 'ENGINEERING.md section 5 item 1' },
+  { topic: 'turndown', method: 'every flow fraction 0.1–1.0 and the minimum flow fraction solved in full (thermal and hydraulic) with the entering temperatures held; part-load points settled to 0.1 % capacity (design point 0.01 %)', source: 'ENGINEERING.md section 5 item 1' },
 ];
 
 function emptyResult(valid: boolean, circuits: CircuitResult[], warnings: ResultWarning[]): SolveResult {
@@ -138,9 +138,17 @@ export function solveCoil(doc: CoilDocument, settings: SolveCoilSettings = {}): 
 
     // Turndown: each flow fraction solved thermally (warm-started from the design solution's workspace).
     const fractions = settings.turndown === false ? [...new Set([doc.conditions.minimumFlowFraction, 1])].sort((a, b) => a - b) : turndownFractions(doc.conditions.minimumFlowFraction);
-    const partLoad = fractions.map((f) => {
-      if (f === 1) return { flowFraction: f, thermal };
-      return { flowFraction: f, thermal: solveCoilThermal(doc, derived, traced, { fluid: props }, { ...thermalOptions, flowFraction: f }, workspace) };
+    const failedFractions: number[] = [];
+    const partLoad = fractions.flatMap((f) => {
+      if (f === 1) return [{ flowFraction: f, thermal }];
+      try {
+        return [{ flowFraction: f, thermal: solveCoilThermal(doc, derived, traced, { fluid: props }, { ...thermalOptions, flowFraction: f, precision: 'part-load' }, workspace) }];
+      } catch (e) {
+        // A part-load point outside the property ranges is left out, not the whole result.
+        if (!(e instanceof RangeError)) throw e;
+        failedFractions.push(f);
+        return [];
+      }
     });
     // Where each circuit turns transitional and laminar: interpolated between the solved fractions, or (without
     // the turndown solves) estimated with Re proportional to flow.
@@ -173,6 +181,13 @@ export function solveCoil(doc: CoilDocument, settings: SolveCoilSettings = {}): 
     warnings.push(...wetFaceVelocityWarnings(doc.conditions.air.faceVelocity_m_s, thermal.condensate_kg_s));
     warnings.push(...energyBalanceWarnings(thermal.energyBalanceError));
     warnings.push(...solverDefectWarnings(thermal, fluid.inletTemperature_C, doc.conditions.air.inletDryBulb_C));
+    if (failedFractions.length > 0) {
+      warnings.push({
+        code: 'turndown-point-impossible',
+        severity: 'warning',
+        message: `part-load points at ${failedFractions.map((f) => `${Math.round(f * 100)} %`).join(', ')} flow could not be solved (a temperature leaves the fluid's property range) and are left out`,
+      });
+    }
     if (!thermal.converged) {
       warnings.push({ code: 'thermal-not-converged', severity: 'warning', message: `the thermal solution did not settle within ${thermal.iterations} outer iterations (${thermal.sweeps} sweeps); the capacity may be off by more than 0.01 %` });
     }
@@ -231,8 +246,15 @@ export function solveCoil(doc: CoilDocument, settings: SolveCoilSettings = {}): 
     result.solveTime_ms = (typeof performance !== 'undefined' ? performance.now() : Date.now()) - started;
     return result;
   } catch (e) {
-    if (!(e instanceof RangeError)) throw e;
-    warnings.push({ code: 'solve-impossible', severity: 'critical', message: `the coil could not be solved: ${e.message}` });
-    return emptyResult(true, circuits, warnings);
+    // Never throw for a schema-valid document: report why, with the thermal and hydraulic parts left out.
+    const message = e instanceof Error ? e.message : String(e);
+    const impossible = e instanceof RangeError;
+    const kept = topology.warnings.slice();
+    kept.push({
+      code: impossible ? 'solve-impossible' : 'solver-error',
+      severity: 'critical',
+      message: impossible ? `the coil could not be solved: ${message}` : `the solver failed unexpectedly (${message}); please report this coil`,
+    });
+    return emptyResult(true, topology.circuits.map(baseCircuit), kept);
   }
 }

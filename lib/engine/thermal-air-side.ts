@@ -105,12 +105,20 @@ export function airSideCoefficients(
     surfaceEfficiencyDry: surfaceEfficiency(etaDry, d.finAreaFraction),
     finEfficiencyWet: etaWet,
     surfaceEfficiencyWet: surfaceEfficiency(etaWet, d.finAreaFraction),
-    warnings: jf.warnings.map((message) => ({
-      code: message.includes('unverified') ? 'air-side-unverified' : 'air-side-range',
-      severity: 'warning' as const,
-      message,
-    })),
+    warnings: airSideWarnings(jf.warnings),
   };
+}
+
+/** The correlation's messages as result warnings: "unverified" on its own, all range notes in one warning. */
+function airSideWarnings(messages: string[]): ResultWarning[] {
+  const out: ResultWarning[] = messages
+    .filter((m) => m.includes('unverified'))
+    .map((message) => ({ code: 'air-side-unverified', severity: 'warning' as const, message }));
+  const ranges = messages.filter((m) => !m.includes('unverified'));
+  if (ranges.length > 0) {
+    out.push({ code: 'air-side-range', severity: 'warning', message: `air-side correlation used outside its data: ${ranges.join('; ')}` });
+  }
+  return out;
 }
 
 /** Dry air pressure drop across the core (Kays & London with Wang's f), Pa. */

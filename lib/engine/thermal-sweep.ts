@@ -263,7 +263,9 @@ export function runSweeps(network: SweepNetwork, inputs: SweepInputs, state: Swe
 
   const prevTube = network.previousTube;
   const dewPointIn = inputs.airInletDewPoint_C ?? Infinity;
-  let maxChange = Infinity;
+  // The largest change of this sweep lives in a typed array: a number captured and rewritten by the closure
+  // below would be boxed on every write.
+  const sweepChange = new Float64Array(1);
 
   // One tube: march its segments in the water direction from water inlet temperature tw; returns the outlet.
   const processTube = (t: number, mw: number, twIn: number): number => {
@@ -275,6 +277,9 @@ export function runSweeps(network: SweepNetwork, inputs: SweepInputs, state: Swe
     const uaW = uaWater[t];
     const uaDry = 1 / (1 / uaA + 1 / uaW);
     const ma = airPerColumn * airShare[t];
+    // Per-tube constants of the wet segment: air-side decay e^(−NTU_o,s) and UA_a,s/c_pa.
+    const wetDecay = Math.exp(-uaAW / (ma * CP_DRY_AIR_BKM));
+    const uaAWOverCpa = uaAW / CP_DRY_AIR_BKM;
     const uStart = upstreamStart[t];
     const uEnd = upstreamStart[t + 1];
     const isForward = forward[t] === 1;
@@ -335,13 +340,12 @@ export function runSweeps(network: SweepNetwork, inputs: SweepInputs, state: Swe
         if (!(Math.abs(twGuess - tw) > 1e-6)) twGuess = tw + 0.05;
         const cs = (curve.enthalpy_J_kg(twGuess) - hsIn) / (twGuess - tw);
         const cwStar = cw / cs;
-        const uaStar = uaAW / CP_DRY_AIR_BKM / (1 + (cs * uaAW) / (CP_DRY_AIR_BKM * uaW));
+        const uaStar = uaAWOverCpa / (1 + (cs * uaAWOverCpa) / uaW);
         const pStar = segmentEffectivenessWaterMixed(uaStar, ma, cwStar);
         const qWet = pStar * cwStar * (hAin - hsIn);
         twOut = tw + qWet / cw;
         const hAout = hAin - qWet / ma;
-        const ntuO = uaAW / (ma * CP_DRY_AIR_BKM);
-        const decay = Math.exp(-ntuO);
+        const decay = wetDecay;
         const hsEff = hAin - (hAin - hAout) / (1 - decay);
         const tsEff = curve.temperatureFromEnthalpy_C(hsEff, surfaceT[seg]);
         surfaceT[seg] = tsEff;
@@ -354,7 +358,7 @@ export function runSweeps(network: SweepNetwork, inputs: SweepInputs, state: Swe
         waOut = airOutW[seg] + relaxation * (waOut - airOutW[seg]);
       }
       const change = Math.max(Math.abs(taOut - airOutT[seg]), Math.abs(twOut - segmentWaterOut[seg]));
-      if (change > maxChange) maxChange = change;
+      if (change > sweepChange[0]) sweepChange[0] = change;
       airOutT[seg] = taOut;
       airOutW[seg] = waOut;
       heatToAir[seg] = q;
@@ -370,9 +374,10 @@ export function runSweeps(network: SweepNetwork, inputs: SweepInputs, state: Swe
   // a symmetric Gauss–Seidel that settles counterflow circuits in far fewer sweeps than either order alone.
   const circuitOf = network.circuitOfTube;
   let sweeps = 0;
+  let maxChange = Infinity;
   while (sweeps < maxSweeps && maxChange > tolerance) {
     sweeps++;
-    maxChange = 0;
+    sweepChange[0] = 0;
     if (sweeps % 2 === 1) {
       for (let c = 0; c < circuits.length; c++) {
         const tubes = circuits[c];
@@ -388,6 +393,7 @@ export function runSweeps(network: SweepNetwork, inputs: SweepInputs, state: Swe
       }
       for (let c = 0; c < circuits.length; c++) circuitWaterOut[c] = tubeWaterOut[circuits[c][circuits[c].length - 1]];
     }
+    maxChange = sweepChange[0];
   }
   return { sweeps, converged: maxChange <= tolerance, maxChange_K: maxChange };
 }

@@ -38,8 +38,11 @@ export const OUTER_CAPACITY_TOLERANCE = 1e-4;
 /** Cap on outer iterations. */
 export const OUTER_MAX_ITERATIONS = 25;
 /** Sweep tolerance inside the coil solve, K (first outer iteration: the loose one, properties still move). */
-export const COIL_SWEEP_TOLERANCE_K = 1e-6;
+export const COIL_SWEEP_TOLERANCE_K = 1e-5;
 export const COIL_FIRST_SWEEP_TOLERANCE_K = 1e-3;
+/** Looser tolerances for turndown points (ThermalOptions.precision 'part-load'). */
+export const PART_LOAD_SWEEP_TOLERANCE_K = 1e-4;
+export const PART_LOAD_CAPACITY_TOLERANCE = 1e-3;
 /** Sweep cap per outer iteration. */
 export const COIL_MAX_SWEEPS = 300;
 /** Wet air pressure drop factor (v1 decision 9). */
@@ -59,6 +62,11 @@ export interface ThermalOptions {
   bendMethod: BendMethod;
   /** Fraction of the document's water flow (turndown). */
   flowFraction?: number;
+  /**
+   * 'design' (default): sweeps to 1e-6 K, capacity settled to 0.01 %. 'part-load': sweeps to 1e-4 K and capacity
+   * to 0.1 %, enough for the turndown curve at a fraction of the cost.
+   */
+  precision?: 'design' | 'part-load';
 }
 
 export interface CoilThermalResult {
@@ -194,6 +202,9 @@ export function solveCoilThermal(
   let hydraulics = solveCoilHydraulics(g, derived, circuits, temps, totalWater, providers.fluid, options.bendMethod);
 
   const warmStart = state.initialised;
+  const partLoad = options.precision === 'part-load';
+  const sweepTolerance = partLoad ? PART_LOAD_SWEEP_TOLERANCE_K : COIL_SWEEP_TOLERANCE_K;
+  const capacityTolerance = partLoad ? PART_LOAD_CAPACITY_TOLERANCE : OUTER_CAPACITY_TOLERANCE;
   let leavingGuess = state.initialised ? mixedLeavingAir(network, state).dryBulb_C : taIn + 0.5 * (twIn - taIn);
   let capacityPrev = NaN;
   let capacity = 0;
@@ -238,7 +249,7 @@ export function solveCoilThermal(
       network,
       { airInletDryBulb_C: taIn, airInletHumidityRatio: wIn, airMassFlowDry_kg_s: airDry, uaAirDry, uaAirWet, uaWater, cpWater, circuitMassFlow, waterInlet_C: twIn, airInletDewPoint_C: air.dewPoint_C, saturation },
       state,
-      { tolerance_K: iterations === 1 && !warmStart ? COIL_FIRST_SWEEP_TOLERANCE_K : COIL_SWEEP_TOLERANCE_K, maxSweeps: COIL_MAX_SWEEPS },
+      { tolerance_K: iterations === 1 && !warmStart ? COIL_FIRST_SWEEP_TOLERANCE_K : sweepTolerance, maxSweeps: COIL_MAX_SWEEPS },
     );
     sweeps += outcome.sweeps;
 
@@ -260,7 +271,7 @@ export function solveCoilThermal(
 
     const change = Math.abs(capacity - capacityPrev) / Math.max(Math.abs(capacity), 1e-12);
     capacityPrev = capacity;
-    if (outcome.converged && change < OUTER_CAPACITY_TOLERANCE && iterations > 1) {
+    if (outcome.converged && change < capacityTolerance && iterations > 1) {
       converged = true;
       break;
     }

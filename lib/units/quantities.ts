@@ -34,7 +34,9 @@ export type QuantityKind =
   | 'airflow' // m3/s | cfm
   | 'humidityRatio' // kg/kg SI value: g/kg | gr/lb
   | 'volume' // m3 SI value: L | US gal
-  | 'mass'; // kg | lb
+  | 'mass' // kg | lb
+  | 'longLength' // m | ft (totals such as the straight tube length of a coil)
+  | 'condensateFlow'; // kg/s SI value: kg/h | lb/h (condensate off a cooling coil)
 
 interface UnitDef {
   unit: string;
@@ -77,6 +79,8 @@ export const UNITS: Record<QuantityKind, Record<UnitSystem, UnitDef>> = {
   humidityRatio: { si: linear('g/kg', 1e-3, 2), ip: linear('gr/lb', GRAIN_kg / POUND_kg, 1) },
   volume: { si: linear('L', 1e-3, 2), ip: linear('US gal', US_GALLON_m3, 2) },
   mass: { si: linear('kg', 1, 2), ip: linear('lb', POUND_kg, 2) },
+  longLength: { si: linear('m', 1, 1), ip: linear('ft', FOOT_m, 0) },
+  condensateFlow: { si: linear('kg/h', 1 / HOUR_s, 1), ip: linear('lb/h', POUND_kg / HOUR_s, 1) },
 };
 
 export const QUANTITY_KINDS = Object.keys(UNITS) as QuantityKind[];

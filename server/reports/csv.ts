@@ -115,7 +115,7 @@ export function billOfMaterialsCsv(_doc: CoilDocument, result: SolveResult, unit
   const measured = (item: string, kind: QuantityKind, si: number | undefined): CsvCell[] => [item, value(kind, si, units), unitLabel(kind, units)];
   const rows: CsvCell[][] = [
     count('tubes', b.tubes),
-    measured('straight tube length, total', 'length', b.straightTubeLength_m),
+    measured('straight tube length, total', 'longLength', b.straightTubeLength_m),
     count('hairpins', b.hairpinCount),
     ...b.hairpins.map((h) => count(`hairpins, ${h.span}`, h.count)),
     count('return bends', b.returnBends),

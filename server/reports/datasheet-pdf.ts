@@ -285,7 +285,7 @@ function performance(doc: PDFKit.PDFDocument, coil: CoilDocument, result: SolveR
     row('Face velocity', show('faceVelocity', faceVelocity, units)),
     row('Airflow, entering air', show('airflow', faceArea === undefined ? undefined : faceVelocity * faceArea, units)),
     row(t.airPressureDropIsWetEstimate ? 'Air pressure drop, wet (est.)' : 'Air pressure drop', show('airPressureDrop', t.airPressureDrop_Pa, units)),
-    row('Condensate', show('massFlow', t.condensate_kg_s, units, units === 'si' ? 4 : 1), t.mode === 'heating' ? 'none' : NOT_RATED),
+    row('Condensate', show('condensateFlow', t.condensate_kg_s, units), t.mode === 'heating' ? 'none' : NOT_RATED),
   ];
   const waterDelta =
     t.leavingWaterTemperature_C !== undefined ? Math.abs(t.leavingWaterTemperature_C - coil.conditions.fluid.inletTemperature_C) : undefined;
@@ -453,7 +453,7 @@ function billOfMaterials(doc: PDFKit.PDFDocument, result: SolveResult, units: Un
   }
   const left: ValueRow[] = [
     countRow('Tubes', b.tubes),
-    row('Straight tube length, total', show('length', b.straightTubeLength_m, units)),
+    row('Straight tube length, total', show('longLength', b.straightTubeLength_m, units)),
     countRow('Hairpins', b.hairpinCount),
     ...b.hairpins.map((h) => countRow(`   hairpins, ${h.span}`, h.count)),
     countRow('Return bends', b.returnBends),

@@ -139,7 +139,7 @@ export function exportService(deps: ServiceDeps) {
     async tubeSheetDxf(userId: string, target: ExportTarget): Promise<ExportFile> {
       const source = await load(userId, target);
       const body = renderTubeSheetDxf(source.document, solve(source.document));
-      return { body, contentType: 'image/vnd.dxf', fileName: fileName(source, 'tube-sheet', 'dxf') };
+      return { body, contentType: 'image/vnd.dxf; charset=utf-8', fileName: fileName(source, 'tube-sheet', 'dxf') };
     },
 
     async csv(userId: string, target: ExportTarget, table: CsvTable, units: UnitSystem): Promise<ExportFile> {

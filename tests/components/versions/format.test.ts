@@ -11,10 +11,12 @@ describe('compared result figures', () => {
     expect(resultFigureLabel('leavingWaterTemperature_C')).toBe('Leaving water');
   });
 
-  it('signs differences and writes "no change" when equal at the shown precision', () => {
+  it('signs differences, shows small ones with more decimals, and writes "no change" only for none', () => {
     expect(formatResultDifference({ key: 'capacity_W', a: 50000, b: 52300, difference: 2300 }, 'si')).toBe('+2.3 kW');
     expect(formatResultDifference({ key: 'waterPressureDrop_Pa', a: 30000, b: 24500, difference: -5500 }, 'si')).toBe('-5.5 kPa');
     expect(formatResultDifference({ key: 'circuitCount', a: 8, b: 8, difference: 0 }, 'si')).toBe('no change');
+    expect(formatResultDifference({ key: 'waterPressureDrop_Pa', a: 8040, b: 8000, difference: -40 }, 'si')).toBe('-0.04 kPa');
+    expect(formatResultDifference({ key: 'capacity_W', a: 50000, b: 50000.001, difference: 0.001 }, 'si')).toBe('no change');
     expect(formatResultDifference({ key: 'capacity_W', a: null, b: 1, difference: null }, 'si')).toBe('—');
   });
 

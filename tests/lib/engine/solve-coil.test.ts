@@ -196,15 +196,19 @@ describe('solveCoil properties on random valid coils', () => {
     );
   });
 
-  it('10 and 20 segments per tube agree within 0.1 %', () => {
+  // Each segment is either dry or wet (v1 decision 11), so a circuit's wet/dry edge moves in steps of one segment:
+  // the step is about 1/(passes · n_s) of the wet–dry difference. Circuits of 4 passes or more keep it under
+  // 0.1 % at 10 segments; a 2-pass circuit on a one-row coil can exceed it (seen: 0.13 %), hence rows >= 2 and
+  // at most tubes-high feeds here.
+  it('10 and 20 segments per tube agree within 0.1 % (circuits of 4 passes or more)', () => {
     fc.assert(
       fc.property(arbCase, (c) => {
-        const doc = documentFor(c);
+        const doc = documentFor({ ...c, rows: Math.max(c.rows, 2) }, Math.max(c.rows, 2) * 2, c.tubes);
         const ten = capacity({ ...doc, options: { segmentsPerTube: 10 } });
         const twenty = capacity({ ...doc, options: { segmentsPerTube: 20 } });
         expect(Math.abs(ten - twenty) / twenty).toBeLessThan(1e-3);
       }),
-      { numRuns: 10 },
+      { numRuns: 15 },
     );
   });
 });

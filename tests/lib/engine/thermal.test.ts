@@ -3,6 +3,7 @@ import { buildSweepNetwork, createSweepState, mixedLeavingAir, runSweeps, type S
 import { tabulatedSaturationCurve } from '@/lib/engine/saturation-table';
 import { saturationEnthalpy_J_kg, saturationTemperatureFromEnthalpy_C, saturationVapourPressure_Pa } from '@/lib/engine/psychrometrics';
 import { solveCoilThermal } from '@/lib/engine/thermal';
+import { wetSegmentBraunKleinMitchell1989 } from '@/lib/engine/wet-coil';
 import { traceCircuits } from '@/lib/engine/topology';
 import { deriveGeometry } from '@/lib/engine/geometry';
 import { serpentineCircuiting } from '@/lib/engine/generators';
@@ -136,6 +137,43 @@ describe('wet segments (ENGINEERING.md 4.8 check K4)', () => {
     return { q, tOut: state.circuitWaterOut[0], wetCount, airQ, total: rows * segments };
   }
   const curve = tabulatedSaturationCurve(101325, 5, 29);
+  it('one wet segment of the sweep equals wetSegmentBraunKleinMitchell1989 (same BKM segment equations, 3.11)', () => {
+    const network = buildSweepNetwork(1, 1, 1, [{ tubes: [0], firstEntersAtConnection: true }]);
+    const state = createSweepState(network);
+    runSweeps(
+      network,
+      {
+        airInletDryBulb_C: 27,
+        airInletHumidityRatio: 0.0112,
+        airMassFlowDry_kg_s: 0.01,
+        uaAirDry: Float64Array.of(30),
+        uaAirWet: Float64Array.of(30),
+        uaWater: Float64Array.of(175),
+        cpWater: Float64Array.of(4200),
+        circuitMassFlow: Float64Array.of(0.05),
+        waterInlet_C: 7,
+        airInletDewPoint_C: 15.774,
+        saturation: curve,
+      },
+      state,
+      { tolerance_K: 1e-11 },
+    );
+    const reference = wetSegmentBraunKleinMitchell1989({
+      uaAir_W_K: 30,
+      uaWater_W_K: 175,
+      airMassFlowDry_kg_s: 0.01,
+      airInletEnthalpy_J_kg: 1006 * 27 + 0.0112 * (2501000 + 1860 * 27),
+      airInletTemperature_C: 27,
+      waterInletTemperature_C: 7,
+      waterCapacityRate_W_K: 210,
+      pressure_Pa: 101325,
+    });
+    expect(state.wet[0]).toBe(1);
+    expect(rel(-state.heatToAir[0], reference.heat_W)).toBeLessThan(1e-6);
+    expect(state.tubeWaterOut[0]).toBeCloseTo(reference.waterOutletTemperature_C, 6);
+    expect(state.airOutT[0]).toBeCloseTo(reference.airOutletTemperature_C, 5);
+    expect(rel(state.airOutW[0], reference.airOutletHumidityRatio)).toBeLessThan(1e-5);
+  });
   it('K4: 2-row wet serpentine, 10 segments per tube → 25 938 W, t_w,out 12.146 °C (tol 2e-3; [C] segment model)', () => {
     const r = wetSerpentine(2, curve);
     expect(r.wetCount).toBe(r.total);
