@@ -20,21 +20,30 @@ export interface EditMeasurement {
   max_ms: number;
 }
 
-/** Times `edits` alternating erase/redraw edits on a rows x tubesPerRow sheet circuited full serpentine. */
-export function measureEditRenderModel(rows = 12, tubesPerRow = 60, edits = 60): EditMeasurement {
+/**
+ * A rows x tubesPerRow chilled-water coil (1/2 in starting point) circuited serpentine with one feed per tube of a
+ * row, for the benches (invented data; about 0.05 kg/s of water per circuit).
+ */
+export function benchDocument(rows: number, tubesPerRow: number, name = 'Bench sheet'): CoilDocument {
   const geometry = { ...startingPointGeometry('half-inch', { rows: Math.min(rows, 8), tubesPerRow }), rows };
-  const doc: CoilDocument = {
+  return {
     schemaVersion: 1,
-    name: 'Bench sheet',
+    name,
     geometry,
     circuiting: serpentineCircuiting(geometry, tubesPerRow),
     conditions: {
       air: { faceVelocity_m_s: 2.5, inletDryBulb_C: 27, inletWetBulb_C: 19.5, altitude_m: 0 },
-      fluid: { kind: 'water', glycolMassFraction: 0, inletTemperature_C: 7, massFlow_kg_s: 3 },
+      fluid: { kind: 'water', glycolMassFraction: 0, inletTemperature_C: 7, massFlow_kg_s: 0.05 * tubesPerRow },
       minimumFlowFraction: 0.3,
       minimumAirTemperature_C: null,
     },
   };
+}
+
+/** Times `edits` alternating erase/redraw edits on a rows x tubesPerRow sheet circuited full serpentine. */
+export function measureEditRenderModel(rows = 12, tubesPerRow = 60, edits = 60): EditMeasurement {
+  const doc = benchDocument(rows, tubesPerRow);
+  const geometry = doc.geometry;
   const store = createEditorStore(doc);
   const layout = buildSheetLayout(geometry); // static layer: once per geometry
   const bend = doc.circuiting.bends[Math.floor(doc.circuiting.bends.length / 2)];

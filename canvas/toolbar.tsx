@@ -1,9 +1,9 @@
 /** The editor's toolbar: drawing tools, the end face shown, undo/redo, fit, temperature colours and help. */
-import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '@/components/ui/theme';
 import type { FaceShown, Tool } from './session';
 
-function ToolButton({ label, hint, active = false, disabled = false, onPress, testID }: { label: string; hint: string; active?: boolean; disabled?: boolean; onPress: () => void; testID: string }) {
+function ToolButton({ label, hint, active = false, disabled = false, compact = false, onPress, testID }: { label: string; hint: string; active?: boolean; disabled?: boolean; compact?: boolean; onPress: () => void; testID: string }) {
   return (
     <Pressable
       role="button"
@@ -13,7 +13,7 @@ function ToolButton({ label, hint, active = false, disabled = false, onPress, te
       disabled={disabled}
       onPress={onPress}
       testID={testID}
-      style={({ pressed }) => [styles.btn, active && styles.btnOn, pressed && !active && styles.btnPressed, disabled && styles.btnOff]}
+      style={({ pressed }) => [styles.btn, compact && styles.btnCompact, active && styles.btnOn, pressed && !active && styles.btnPressed, disabled && styles.btnOff]}
     >
       <Text numberOfLines={1} style={[type.smallStrong, { color: active ? colors.textOnDark : colors.text }]}>
         {label}
@@ -50,29 +50,31 @@ export interface ToolbarProps {
   onFit: () => void;
   onTemperature: () => void;
   onHelp?: () => void;
-  /** Phones: one row that scrolls sideways inside the bar, so the sheet keeps the height. */
+  /** Phones: short labels and tighter buttons; the groups wrap onto a second line rather than scroll sideways. */
   compact?: boolean;
 }
 
 export function EditorToolbar(p: ToolbarProps) {
-  const groups = (
-    <>
+  const c = p.compact ?? false;
+  return (
+    <View style={[styles.bar, c && styles.barCompact]} accessibilityLabel="Editor tools" testID="editor-toolbar">
       <View style={styles.group} role="toolbar" accessibilityLabel="Drawing tools">
         {tools.map((t) => (
-          <ToolButton key={t.tool} label={t.label} hint={t.hint} active={p.tool === t.tool} onPress={() => p.onTool(t.tool)} testID={`tool-${t.tool}`} />
+          <ToolButton key={t.tool} compact={c} label={t.label} hint={t.hint} active={p.tool === t.tool} onPress={() => p.onTool(t.tool)} testID={`tool-${t.tool}`} />
         ))}
       </View>
       <View style={styles.group} role="toolbar" accessibilityLabel="End face shown">
         {faces.map((f) => (
-          <ToolButton key={f.face} label={p.compact ? f.short : f.label} hint={f.hint} active={p.face === f.face} onPress={() => p.onFace(f.face)} testID={`face-${f.face}`} />
+          <ToolButton key={f.face} compact={c} label={c ? f.short : f.label} hint={f.hint} active={p.face === f.face} onPress={() => p.onFace(f.face)} testID={`face-${f.face}`} />
         ))}
       </View>
       <View style={styles.group}>
-        <ToolButton label="Undo" hint="Undo (Ctrl/Cmd+Z)" disabled={!p.canUndo} onPress={p.onUndo} testID="undo" />
-        <ToolButton label="Redo" hint="Redo (Shift+Ctrl/Cmd+Z)" disabled={!p.canRedo} onPress={p.onRedo} testID="redo" />
-        <ToolButton label="Fit" hint="Fit the sheet to the screen (0)" onPress={p.onFit} testID="fit" />
+        <ToolButton compact={c} label="Undo" hint="Undo (Ctrl/Cmd+Z)" disabled={!p.canUndo} onPress={p.onUndo} testID="undo" />
+        <ToolButton compact={c} label="Redo" hint="Redo (Shift+Ctrl/Cmd+Z)" disabled={!p.canRedo} onPress={p.onRedo} testID="redo" />
+        <ToolButton compact={c} label="Fit" hint="Fit the sheet to the screen (0)" onPress={p.onFit} testID="fit" />
         <ToolButton
-          label="Temperatures"
+          compact={c}
+          label={c ? 'Temps' : 'Temperatures'}
           hint={p.temperatureAvailable ? 'Colour tubes by mean water temperature (T)' : 'Temperature colours need a valid, solved circuiting'}
           active={p.temperature}
           disabled={!p.temperatureAvailable}
@@ -81,28 +83,16 @@ export function EditorToolbar(p: ToolbarProps) {
         />
         {p.onHelp ? <ToolButton label="Keys" hint="Keyboard shortcuts (?)" onPress={p.onHelp} testID="shortcuts-help" /> : null}
       </View>
-    </>
-  );
-  if (p.compact) {
-    return (
-      <ScrollView horizontal style={styles.compactBar} contentContainerStyle={styles.compactContent} accessibilityLabel="Editor tools" showsHorizontalScrollIndicator={false}>
-        {groups}
-      </ScrollView>
-    );
-  }
-  return (
-    <View style={styles.bar} accessibilityLabel="Editor tools">
-      {groups}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   bar: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, padding: space.sm, backgroundColor: colors.surface, borderBottomWidth: 1, borderBottomColor: colors.border },
-  compactBar: { flexGrow: 0, backgroundColor: colors.surface, borderBottomWidth: 1, borderBottomColor: colors.border },
-  compactContent: { flexDirection: 'row', gap: space.sm, padding: space.xs },
-  group: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xxs, padding: space.xxs, borderRadius: radius.sm, backgroundColor: colors.surfaceMuted },
+  barCompact: { gap: space.xs, padding: space.xs },
+  group: { flexDirection: 'row', flexWrap: 'wrap', flexShrink: 1, maxWidth: '100%', gap: space.xxs, padding: space.xxs, borderRadius: radius.sm, backgroundColor: colors.surfaceMuted },
   btn: { minHeight: 36, minWidth: 36, paddingHorizontal: space.sm, justifyContent: 'center', alignItems: 'center', borderRadius: radius.sm - 2 },
+  btnCompact: { paddingHorizontal: space.xs + 2 },
   btnOn: { backgroundColor: colors.primary },
   btnPressed: { backgroundColor: colors.border },
   btnOff: { opacity: 0.45 },

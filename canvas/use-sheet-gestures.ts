@@ -6,7 +6,7 @@
 import { useCallback, useEffect, useMemo, useRef, type RefObject } from 'react';
 import { Platform } from 'react-native';
 import type { TubeRef } from '@/lib/engine/types';
-import { hitBend, hitTube, type SheetLayout } from './render-model';
+import { hitBend, hitTube, spotOf, type SheetLayout } from './render-model';
 import { activeFace } from './session';
 import type { EditorStore } from './store';
 import type { ViewStore } from './view-store';
@@ -56,11 +56,13 @@ export function useSheetGestures(
       const s = store.getState();
       const { tool, face, pendingTube } = s.session;
       const end = activeFace(face);
+      const pickBend = (p: { x: number; y: number } | undefined) => {
+        const bend = tool === 'select' && p ? hitBend(layout, s.document.circuiting, end, p.x, p.y) : null;
+        return bend ? ({ kind: 'bend', ...bend } as const) : null;
+      };
       if (!tube) {
         s.setPendingTube(null);
-        // With Select, a tap on a bend's line picks the bend (to mark it as a crossover).
-        const bend = tool === 'select' && at ? hitBend(layout, s.document.circuiting, end, at.x, at.y) : null;
-        s.select(bend ? { kind: 'bend', ...bend } : null);
+        s.select(pickBend(at));
         return;
       }
       switch (tool) {
@@ -79,9 +81,13 @@ export function useSheetGestures(
         case 'erase':
           s.dispatch('eraseTubeEnd', { end, tube });
           break;
-        case 'select':
-          s.select({ kind: 'tube', tube });
+        case 'select': {
+          // A tap on a bend's line, off the tube's own circle, picks the bend (to mark it as a crossover).
+          const spot = at ? spotOf(layout, tube) : undefined;
+          const onTube = !spot || !at || Math.hypot(spot.x - at.x, spot.y - at.y) <= layout.tubeRadius * 1.1;
+          s.select((!onTube && pickBend(at)) || { kind: 'tube', tube });
           break;
+        }
       }
     },
     [layout, store],

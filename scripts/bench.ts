@@ -195,7 +195,7 @@ function main(): void {
   const args = process.argv.slice(2);
   const onlyIndex = args.indexOf('--only');
   const only = onlyIndex >= 0 ? args[onlyIndex + 1] : undefined;
-  report('engine', only === 'hydraulics' ? engineBenchmarks().slice(0, 1) : engineBenchmarks());
+  report('engine', engineBenchmarks());
   if (only !== 'engine') {
     const ui = uiBenchmarks();
     if (ui.length > 0) report('editor', ui);

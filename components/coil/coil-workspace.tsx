@@ -3,7 +3,7 @@
  * editor in the middle with forms on the left and results on the right; phones give the editor the screen and
  * put forms and results under tabs. The draft autosaves; results follow every change.
  */
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useMemo, useState, type ReactNode } from 'react';
 import { ActivityIndicator, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'expo-router';
@@ -29,7 +29,17 @@ import { SaveStatus } from './save-status';
 import { useAutosave } from './use-autosave';
 import { useLiveSolve } from './use-live-solve';
 
-export function CoilWorkspace({ projectId, coilId }: { projectId: string; coilId: string }) {
+export interface CoilWorkspaceProps {
+  projectId: string;
+  coilId: string;
+  /**
+   * Panels the app mounts beside the results (versions, files, exports): shown under the results in the right-hand
+   * column on wide screens and at the end of the Results tab on phones, under the heading "Versions & files".
+   */
+  extraPanels?: ReactNode;
+}
+
+export function CoilWorkspace({ projectId, coilId, extraPanels }: CoilWorkspaceProps) {
   const coil = useQuery({ queryKey: coilKeys.one(coilId), queryFn: () => getCoil(coilId), staleTime: Infinity, gcTime: 0 });
   if (coil.isPending) {
     return (
@@ -50,13 +60,13 @@ export function CoilWorkspace({ projectId, coilId }: { projectId: string; coilId
       </View>
     );
   }
-  return <LoadedWorkspace key={coil.data.id} coil={coil.data} />;
+  return <LoadedWorkspace key={coil.data.id} coil={coil.data} extraPanels={extraPanels} />;
 }
 
 type PhoneTab = 'sheet' | 'geometry' | 'conditions' | 'results';
 type FormTab = 'geometry' | 'conditions';
 
-function LoadedWorkspace({ coil }: { coil: Coil }) {
+function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: ReactNode }) {
   const [store] = useState<EditorStore>(() => createEditorStore(coil.document));
   const autosave = useAutosave(coil.id, store, coil.revision);
   const document = useEditor(store, (s) => s.document);
@@ -88,7 +98,19 @@ function LoadedWorkspace({ coil }: { coil: Coil }) {
   const editor = (
     <CircuitEditor store={store} topology={live.topology} result={live.fresh ? live.result : null} formatTemperature={formatTemperature} keyboard={isWide} />
   );
-  const results = <ResultsPanel live={live} system={unitSystem} onSelectIssue={onSelectIssue} onSelectCircuit={onSelectCircuit} />;
+  const results = (
+    <>
+      <ResultsPanel live={live} system={unitSystem} onSelectIssue={onSelectIssue} onSelectCircuit={onSelectCircuit} />
+      {extraPanels ? (
+        <View style={styles.extra} testID="workspace-extra-panels">
+          <Text role="heading" aria-level={2} style={[type.smallStrong, styles.extraTitle]}>
+            Versions & files
+          </Text>
+          {extraPanels}
+        </View>
+      ) : null}
+    </>
+  );
   const geometryForm = <GeometryForm store={store} system={unitSystem} fieldErrors={fieldErrors} />;
   const conditionsForm = <ConditionsForm store={store} system={unitSystem} fieldErrors={fieldErrors} />;
 
@@ -202,6 +224,8 @@ const styles = StyleSheet.create({
   sideTabs: { padding: space.md, paddingBottom: 0 },
   sideContent: { padding: space.md, gap: space.lg },
   centre: { flex: 1, minWidth: 0, minHeight: 0 },
+  extra: { gap: space.md, paddingTop: space.md, borderTopWidth: 1, borderTopColor: colors.border },
+  extraTitle: { color: colors.textMuted, textTransform: 'uppercase', letterSpacing: 0.6 },
   phoneTabs: { paddingHorizontal: space.md, paddingTop: space.sm },
   phoneEditor: { flex: 1, minHeight: 0 },
   phoneScroll: { flex: 1 },

@@ -6,6 +6,7 @@
 import type { ReactNode } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { Banner } from '@/components/ui/banner';
+import { useBreakpoint } from '@/components/ui/use-breakpoint';
 import { colors, radius, space, type } from '@/components/ui/theme';
 import { formatNumber, formatQuantity, unitLabel, type QuantityKind, type UnitSystem } from '@/lib/units';
 import type { CircuitResult, ResultWarning, SolveResult, TopologyError, TubeRef } from '@/lib/engine/types';
@@ -88,7 +89,44 @@ function cell(c: CircuitResult, key: string, system: UnitSystem): string {
   }
 }
 
+/** Phones: one card per circuit, so no column scrolls out of sight. */
+function CircuitCards({ circuits, system, onSelect }: { circuits: CircuitResult[]; system: UnitSystem; onSelect: (index: number) => void }) {
+  const figures = COLS.filter((c) => !['index', 'passes', 'arrangement'].includes(c.key));
+  return (
+    <View style={styles.cards} testID="circuit-table">
+      {circuits.map((c) => (
+        <Pressable
+          key={c.index}
+          role="button"
+          accessibilityLabel={`Show circuit ${c.index} on the sheet`}
+          onPress={() => onSelect(c.index)}
+          style={({ pressed }) => [styles.card, pressed && { backgroundColor: colors.surfaceMuted }]}
+          testID={`circuit-row-${c.index}`}
+        >
+          <Text style={[type.smallStrong, { color: colors.text }]}>
+            {`Circuit ${c.index} · ${c.passes} passes · ${arrangementWords[c.arrangement]}`}
+          </Text>
+          <View style={styles.cardFigures}>
+            {figures.map((col) => (
+              <View key={col.key} style={styles.cardFigure}>
+                <Text style={[type.caption, { color: colors.textMuted }]} numberOfLines={1}>
+                  {col.kind ? `${col.title} (${unitLabel(col.kind, system)})` : col.title}
+                </Text>
+                <Text style={[col.key === 'regime' ? type.small : type.number, { color: colors.text }]} numberOfLines={1}>
+                  {cell(c, col.key, system)}
+                </Text>
+              </View>
+            ))}
+          </View>
+        </Pressable>
+      ))}
+    </View>
+  );
+}
+
 export function CircuitTable({ circuits, system, onSelect }: { circuits: CircuitResult[]; system: UnitSystem; onSelect: (index: number) => void }) {
+  const { isWide } = useBreakpoint();
+  if (!isWide) return <CircuitCards circuits={circuits} system={system} onSelect={onSelect} />;
   const textCols = new Set(['arrangement', 'regime']);
   return (
     <ScrollView horizontal style={styles.tableScroll} contentContainerStyle={styles.table} testID="circuit-table">
@@ -180,7 +218,7 @@ export function ResultsPanel({
       ) : null}
       {live.error && !invalid ? <Banner tone="error" title="The solve failed">{live.error}</Banner> : null}
       {!invalid && result && result.valid ? (
-        <View style={[styles.stack, !fresh && styles.stale]} testID={fresh ? 'results-fresh' : 'results-stale'}>
+        <View style={[styles.stack, !fresh && styles.stale]} testID={fresh ? 'results-fresh' : 'results-stale'} {...({ dataSet: { solveVersion: String(live.resultVersion) } } as object)}>
           {!fresh ? (
             <Text style={[type.smallStrong, styles.staleTag]} testID="results-stale-tag">
               Updating: these figures are for the previous drawing
@@ -226,6 +264,10 @@ const styles = StyleSheet.create({
   unit: { color: colors.textMuted },
   right: { textAlign: 'right' },
   textCol: { paddingLeft: space.sm },
+  cards: { gap: space.sm },
+  card: { padding: space.sm, gap: space.xs, borderRadius: radius.sm, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.border },
+  cardFigures: { flexDirection: 'row', flexWrap: 'wrap', rowGap: space.xs, columnGap: space.md },
+  cardFigure: { flexBasis: 96, flexGrow: 1 },
   issues: { gap: space.xs },
   issue: { borderLeftWidth: 4, paddingLeft: space.sm, paddingVertical: space.xs, backgroundColor: colors.surface, borderRadius: 2 },
 });

@@ -1,10 +1,11 @@
 /**
- * Live results: the drawing is traced on the client at once (topology errors show instantly) and, 150 ms after the
- * last change, solved by the server (POST /api/solve through react-query). A result is "fresh" only when it belongs
+ * Live results: the drawing is traced on the client at once (topology errors show instantly) and solved by the
+ * server (POST /api/solve through react-query): a single edit is sent at once, a burst of edits at most once per
+ * 150 ms with the latest drawing (leading and trailing edge). A result is "fresh" only when it belongs
  * to the document version on screen; otherwise it is kept but marked stale. Invalid drawings are not sent: their
  * errors are the answer, never old numbers.
  */
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { solve } from '@/lib/api/solve';
 import { coilDocumentSchema } from '@/lib/schema/coil-document';
@@ -21,6 +22,8 @@ export interface LiveSolve {
   result: SolveResult | null;
   /** True when `result` belongs to the drawing on screen. */
   fresh: boolean;
+  /** The document version `result` was solved for (the bench and tests watch it), or null. */
+  resultVersion: number | null;
   solving: boolean;
   error: string | null;
 }
@@ -34,8 +37,14 @@ export function useLiveSolve(coilId: string, document: CoilDocument, version: nu
   const solvable = topology.valid && issues.length === 0;
 
   const [request, setRequest] = useState({ document, version, solvable });
+  const lastSent = useRef(0);
   useEffect(() => {
-    const t = setTimeout(() => setRequest({ document, version, solvable }), LIVE_SOLVE_DELAY_MS);
+    // Only solvable drawings are sent, so only they count against the throttle.
+    const wait = solvable ? Math.max(0, lastSent.current + LIVE_SOLVE_DELAY_MS - Date.now()) : 0;
+    const t = setTimeout(() => {
+      if (solvable) lastSent.current = Date.now();
+      setRequest({ document, version, solvable });
+    }, wait);
     return () => clearTimeout(t);
   }, [document, version, solvable]);
 
@@ -56,6 +65,7 @@ export function useLiveSolve(coilId: string, document: CoilDocument, version: nu
     documentIssues: issues,
     result: data?.result ?? null,
     fresh,
+    resultVersion: data?.version ?? null,
     solving: solvable && (!fresh || query.isFetching),
     error: query.error ? query.error.message : null,
   };

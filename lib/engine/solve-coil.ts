@@ -91,6 +91,39 @@ function emptyResult(valid: boolean, circuits: CircuitResult[], warnings: Result
   return { valid, errors: [], warnings, circuits, totals: { circuitCount: circuits.length }, tubes: [] };
 }
 
+/**
+ * Glycol derating (ENGINEERING.md section 5 item 2): the same coil with plain water at the same mass flow and
+ * entering temperature, stated as an info note; empty when water cannot run at that temperature.
+ */
+function glycolDerating(
+  doc: CoilDocument,
+  derived: ReturnType<typeof deriveGeometry>,
+  traced: TracedCircuit[],
+  options: ThermalOptions,
+  capacity_W: number,
+  pressureDrop_Pa: number,
+  slowCircuits: boolean,
+): ResultWarning[] {
+  const water = { ...doc.conditions.fluid, kind: 'water' as const, glycolMassFraction: 0 };
+  if (water.inletTemperature_C < 1) return [];
+  try {
+    const waterDoc: CoilDocument = { ...doc, conditions: { ...doc.conditions, fluid: water } };
+    const ref = solveCoilThermal(waterDoc, derived, traced, { fluid: cachedFluidProperties(water) }, options);
+    if (!(ref.capacity_W > 0)) return [];
+    const advice = slowCircuits ? ' Circuits run below Re 4000 with this glycol: fewer, longer circuits (higher velocity) recover much of the loss.' : '';
+    return [
+      {
+        code: 'glycol-derating',
+        severity: 'info',
+        message: `with plain water at the same flow this coil would give ${(ref.capacity_W / 1000).toFixed(1)} kW at ${(ref.hydraulics.pressureDrop_Pa / 1000).toFixed(1)} kPa; the glycol gives ${Math.round((capacity_W / ref.capacity_W) * 100)} % of that capacity at ${(pressureDrop_Pa / ref.hydraulics.pressureDrop_Pa).toFixed(2)} × the pressure drop.${advice}`,
+      },
+    ];
+  } catch (e) {
+    if (e instanceof RangeError) return [];
+    throw e;
+  }
+}
+
 /** Engine-side switches of a solve (not part of the document). */
 export interface SolveCoilSettings {
   /** Solve every turndown fraction thermally (default true); false reports only the design point's fraction. */
@@ -180,6 +213,9 @@ export function solveCoil(doc: CoilDocument, settings: SolveCoilSettings = {}): 
     warnings.push(...thermal.warnings);
     warnings.push(...wetFaceVelocityWarnings(doc.conditions.air.faceVelocity_m_s, thermal.condensate_kg_s));
     warnings.push(...energyBalanceWarnings(thermal.energyBalanceError));
+    if (fluid.kind !== 'water' && settings.turndown !== false) {
+      warnings.push(...glycolDerating(doc, derived, traced, thermalOptions, thermal.capacity_W, hydraulics.pressureDrop_Pa, designFacts.some((c) => c.regime !== 'turbulent')));
+    }
     warnings.push(...solverDefectWarnings(thermal, fluid.inletTemperature_C, doc.conditions.air.inletDryBulb_C));
     if (failedFractions.length > 0) {
       warnings.push({

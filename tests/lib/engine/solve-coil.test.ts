@@ -50,6 +50,12 @@ describe('solveCoil on the example documents', () => {
     expect(r.totals.waterPressureDrop_Pa).toBeGreaterThan(45000);
     expect(r.warnings.find((w) => w.code === 'pressure-drop-high')?.severity).toBe('critical');
     expect(r.warnings.find((w) => w.code === 'part-load-laminar-capacity')?.message).toMatch(/kW/);
+    // Glycol derating against plain water (ENGINEERING.md section 5 item 2): less capacity, more pressure drop.
+    const derating = r.warnings.find((w) => w.code === 'glycol-derating');
+    expect(derating?.severity).toBe('info');
+    const [, pct, ratio] = /gives (\d+) % of that capacity at ([\d.]+) ×/.exec(derating!.message) ?? [];
+    expect(Number(pct)).toBeLessThan(100);
+    expect(Number(ratio)).toBeGreaterThan(1);
   });
 
   it('a wet coil reports condensate, latent capacity and a wet air pressure drop labelled an estimate', () => {
