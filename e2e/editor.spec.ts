@@ -54,6 +54,13 @@ test('draw, break, undo, generate, switch units and reload a coil', async ({ pag
   await expect(page).toHaveURL(/\/coils\//);
   await expect(page.getByTestId('circuit-summary')).toHaveText(/4 circuits · 2 passes · counterflow/);
   await expect(tube(page, 2, 4)).toBeVisible();
+  // Every tool is on screen: nothing is cut off at the right and nothing scrolls sideways.
+  const width = page.viewportSize()!.width;
+  for (const button of await page.getByTestId('editor-toolbar').getByRole('button').all()) {
+    const box = (await button.boundingBox())!;
+    expect(box.x + box.width, await button.innerText()).toBeLessThanOrEqual(width);
+  }
+  await expectNoSidewaysScroll(page);
 
   // 2. Clear it with the erase tool and draw two 4-pass counterflow circuits bend by bend.
   await page.getByTestId('tool-erase').click();
@@ -105,6 +112,25 @@ test('draw, break, undo, generate, switch units and reload a coil', async ({ pag
   await snap(page, testInfo, '03b-temperatures');
   await page.getByTestId('overlay-temperature').click();
 
+  // Crossovers: with Select, a tube offers its bend on the face shown; a tap on the bend's line picks the bend.
+  // Marking draws a bridge mark and is one undo step.
+  await page.getByTestId('face-connection').click();
+  await tube(page, 2, 1).click();
+  await page.getByTestId('toggle-crossover').click();
+  await expect(page.getByTestId('crossover-connection-r2-t1-r1-t1')).toBeAttached();
+  await expect(page.getByTestId('toggle-crossover')).toHaveText('Unmark crossover');
+  await snap(page, testInfo, '03c-crossover');
+  await page.getByTestId('undo').click();
+  await expect(page.getByTestId('crossover-connection-r2-t1-r1-t1')).toHaveCount(0);
+  const [ba, bb] = [(await tube(page, 2, 3).boundingBox())!, (await tube(page, 1, 3).boundingBox())!];
+  await page.mouse.click((ba.x + ba.width / 2 + bb.x + bb.width / 2) / 2, (ba.y + ba.height / 2 + bb.y + bb.height / 2) / 2);
+  await expect(page.getByTestId('tube-readout')).toHaveText('Bend row 2 tube 3 to row 1 tube 3, connection end');
+  await page.getByTestId('toggle-crossover').click();
+  await expect(page.getByTestId('crossover-connection-r2-t3-r1-t3')).toBeAttached();
+  await expect(page.getByTestId('tube-readout')).toHaveText(/connection end, crossover$/);
+  await page.getByTestId('toggle-crossover').click();
+  await expect(page.getByTestId('crossover-connection-r2-t3-r1-t3')).toHaveCount(0);
+
   // 3. Break a bend: the sheet marks the broken circuit's tubes and the summary names the problem.
   await page.getByTestId('tool-erase').click();
   await page.getByTestId('face-opposite').click();
@@ -112,6 +138,13 @@ test('draw, break, undo, generate, switch units and reload a coil', async ({ pag
   await expect(page.getByTestId('circuit-summary')).toHaveText(/problem/);
   await expect(tube(page, 1, 1)).toHaveAttribute('stroke', '#A52A1F');
   await snap(page, testInfo, '04-broken');
+  // Tapping the problem in the list brings the sheet back (phone) with the other circuit faded.
+  await showTab('Results');
+  await page.getByTestId('issue-list').getByRole('button').first().click();
+  await expect(tube(page, 2, 4)).toBeVisible();
+  await expect(tube(page, 2, 4).locator('..')).toHaveAttribute('opacity', '0.35');
+  await expect(tube(page, 1, 1).locator('..')).not.toHaveAttribute('opacity', '0.35');
+  await snap(page, testInfo, '04b-problem-shown');
 
   // 4. Undo and redo (buttons; keyboard too on wide screens).
   await page.getByTestId('undo').click();

@@ -128,28 +128,47 @@ export function CircuitTable({ circuits, system, onSelect }: { circuits: Circuit
   const { isWide } = useBreakpoint();
   if (!isWide) return <CircuitCards circuits={circuits} system={system} onSelect={onSelect} />;
   const textCols = new Set(['arrangement', 'regime']);
-  return (
-    <ScrollView horizontal style={styles.tableScroll} contentContainerStyle={styles.table} testID="circuit-table">
-      <View>
-        <View style={[styles.tr, styles.th]}>
-          {COLS.map((col) => (
-            <View key={col.key} style={[{ width: col.width }, textCols.has(col.key) && styles.textCol]}>
-              <Text style={[type.caption, styles.thText, !textCols.has(col.key) && styles.right]}>{col.title}</Text>
-              <Text style={[type.caption, styles.unit, !textCols.has(col.key) && styles.right]}>{col.kind ? unitLabel(col.kind, system) : ' '}</Text>
-            </View>
-          ))}
+  const [first, ...rest] = COLS;
+  const header = (cols: typeof COLS) => (
+    <View style={[styles.tr, styles.th]}>
+      {cols.map((col) => (
+        <View key={col.key} style={[{ width: col.width }, textCols.has(col.key) && styles.textCol]}>
+          <Text style={[type.caption, styles.thText, !textCols.has(col.key) && styles.right]}>{col.title}</Text>
+          <Text style={[type.caption, styles.unit, !textCols.has(col.key) && styles.right]}>{col.kind ? unitLabel(col.kind, system) : ' '}</Text>
         </View>
-        {circuits.map((c) => (
-          <Pressable key={c.index} role="button" accessibilityLabel={`Show circuit ${c.index} on the sheet`} onPress={() => onSelect(c.index)} style={({ pressed }) => [styles.tr, pressed && { backgroundColor: colors.surfaceMuted }]} testID={`circuit-row-${c.index}`}>
-            {COLS.map((col) => (
-              <Text key={col.key} style={[textCols.has(col.key) ? [type.small, styles.textCol] : type.number, { width: col.width, color: colors.text }, !textCols.has(col.key) && styles.right]} numberOfLines={1}>
-                {cell(c, col.key, system)}
-              </Text>
-            ))}
-          </Pressable>
-        ))}
+      ))}
+    </View>
+  );
+  const row = (c: CircuitResult, cols: typeof COLS, testID?: string) => (
+    <Pressable
+      key={c.index}
+      role="button"
+      accessibilityLabel={`Show circuit ${c.index} on the sheet`}
+      onPress={() => onSelect(c.index)}
+      style={({ pressed }) => [styles.tr, styles.trBody, pressed && { backgroundColor: colors.surfaceMuted }]}
+      testID={testID}
+    >
+      {cols.map((col) => (
+        <Text key={col.key} style={[textCols.has(col.key) ? [type.small, styles.textCol] : type.number, { width: col.width, color: colors.text }, !textCols.has(col.key) && styles.right]} numberOfLines={1}>
+          {cell(c, col.key, system)}
+        </Text>
+      ))}
+    </Pressable>
+  );
+  // The circuit number stays put while the figures scroll sideways when the panel is narrower than the table.
+  return (
+    <View style={styles.tableWrap} testID="circuit-table">
+      <View style={styles.stickyCol}>
+        {header([first])}
+        {circuits.map((c) => row(c, [first]))}
       </View>
-    </ScrollView>
+      <ScrollView horizontal style={styles.tableScroll} contentContainerStyle={styles.table}>
+        <View>
+          {header(rest)}
+          {circuits.map((c) => row(c, rest, `circuit-row-${c.index}`))}
+        </View>
+      </ScrollView>
+    </View>
   );
 }
 
@@ -256,9 +275,12 @@ const styles = StyleSheet.create({
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   figure: { flexGrow: 1, flexBasis: 140, padding: space.sm, borderRadius: radius.sm, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.border },
   figureValue: { textAlign: 'right', color: colors.text, fontSize: 16 },
-  tableScroll: { flexGrow: 0 },
+  tableWrap: { flexDirection: 'row' },
+  stickyCol: { borderRightWidth: 1, borderRightColor: colors.border, paddingRight: space.xs },
+  tableScroll: { flexGrow: 1, flexShrink: 1 },
+  trBody: { height: 32 },
   table: { paddingBottom: space.xs },
-  tr: { flexDirection: 'row', gap: space.xs, paddingVertical: space.xs, borderBottomWidth: 1, borderBottomColor: colors.border, alignItems: 'center' },
+  tr: { flexDirection: 'row', gap: space.xs, paddingVertical: space.xs, paddingLeft: space.xxs, borderBottomWidth: 1, borderBottomColor: colors.border, alignItems: 'center' },
   th: { borderBottomColor: colors.borderStrong },
   thText: { color: colors.text, fontWeight: '600' },
   unit: { color: colors.textMuted },

@@ -64,16 +64,16 @@ function baseCircuit(c: TracedCircuit): CircuitResult {
 const HYDRAULIC_METHODS: MethodNote[] = [
   { topic: 'tube friction', method: 'Churchill (1977) Darcy friction factor over the finned length of each tube at its local temperature; drawn copper roughness 1.5 µm unless given', source: 'Churchill, S.W. (1977) Chem. Eng. 84(24):91–92' },
   { topic: 'return bends and hairpins', method: 'Rennels & Hudson K with the local Churchill f_D for every bend (Ito 1960 when chosen); sharp entry K 0.5, exit K 1.0', source: 'Rennels, D.C., Hudson, H.M. (2012) Pipe Flow, Wiley; Ito, H. (1960) J. Basic Eng. 82:131' },
-  { topic: 'flow split', method: 'all circuits share one header-to-header pressure drop; bracketed log-log secant with bisection fallback, flows to 1e-12', source: 'ENGINEERING.md 3.6' },
-  { topic: 'coil water pressure drop', method: 'the common circuit pressure drop; nozzle and header losses are left out (the document has no connection size)', source: 'ENGINEERING.md v1 decision 4' },
+  { topic: 'flow split', method: 'all circuits share one header-to-header pressure drop; bracketed log-log secant with bisection fallback, flows to 1e-12', source: 'Tubeloom method (parallel pipes share one pressure drop)' },
+  { topic: 'coil water pressure drop', method: 'the common circuit pressure drop; nozzle and header losses are left out (the document has no connection size)', source: 'Tubeloom version 1 choice' },
   { topic: 'fluid properties', method: 'water: IAPWS-IF97 region 1, IAPWS 2008 viscosity, IAPWS 2011 conductivity at 0.3 MPa; glycols: Melinder polynomials', source: 'IAPWS R7-97, R12-08, R15-11; Melinder, Å. (2010) IIR' },
-  { topic: 'erosion velocity limit', method: '"cold" water taken as up to 30 °C (2.4 m/s); 1.5 m/s up to 60 °C; 0.9 m/s above (our choice of the cold bound)', source: 'ENGINEERING.md 2.5' },
+  { topic: 'erosion velocity limit', method: '"cold" water taken as up to 30 °C (2.4 m/s); 1.5 m/s up to 60 °C; 0.9 m/s above (our choice of the cold bound)', source: 'Common practice for copper tube; 30 °C bound is our choice' },
 ];
 
 const THERMAL_METHODS = (segments: number, airMixing: 'strip' | 'staggered', fin: 'plain' | 'wavy'): MethodNote[] => [
-  { topic: 'tube-by-tube solver', method: `${segments} segments per tube; water followed along each circuit; air ${airMixing === 'strip' ? 'in strips (each tube position keeps its own air)' : 'mixed half-and-half between the two upstream tubes (staggered, half-pitch bands)'}; Gauss–Seidel sweeps to 1e-5 K, outer iterations until the capacity changes < 0.01 %`, source: 'ENGINEERING.md 3.12' },
-  { topic: 'dry segments', method: 'water mixed, air unmixed segment effectiveness P_w = 1 − exp[−(C_a/C_w)(1 − e^(−UA/C_a))]', source: 'ENGINEERING.md 3.10; Incropera & DeWitt ε-NTU relations' },
-  { topic: 'wet segments', method: 'enthalpy-based ε-NTU (BKM) per segment, c_s between the segment water temperatures; wet when the surface temperature at the segment air inlet is below the local dew point; a segment flipping 5 times is frozen', source: 'Braun, Klein & Mitchell (1989) ASHRAE Trans. 95(2); ENGINEERING.md v1 decision 11' },
+  { topic: 'tube-by-tube solver', method: `${segments} segments per tube; water followed along each circuit; air ${airMixing === 'strip' ? 'in strips (each tube position keeps its own air)' : 'mixed half-and-half between the two upstream tubes (staggered, half-pitch bands)'}; Gauss–Seidel sweeps to 1e-5 K, outer iterations until the capacity changes < 0.01 %`, source: 'Tubeloom method on ε-NTU relations (Shah & Sekulić 2003)' },
+  { topic: 'dry segments', method: 'water mixed, air unmixed segment effectiveness P_w = 1 − exp[−(C_a/C_w)(1 − e^(−UA/C_a))]', source: 'Incropera & DeWitt, Fundamentals of Heat and Mass Transfer' },
+  { topic: 'wet segments', method: 'enthalpy-based ε-NTU (BKM) per segment, c_s between the segment water temperatures; wet when the surface temperature at the segment air inlet is below the local dew point; a segment flipping 5 times is frozen', source: 'Braun, Klein & Mitchell (1989) ASHRAE Trans. 95(2)' },
   { topic: 'saturation curve', method: 'ASHRAE psychrometric equations tabulated once per solve on a 0.1 K grid with cubic Hermite interpolation (our speed choice)', source: 'ASHRAE Handbook—Fundamentals 2017 ch. 1 (psychrolib)' },
   { topic: 'tube-side heat transfer', method: 'VDI / Gnielinski (2013) scheme per tube at its mean water temperature with the circuit Re; L = developed circuit length', source: 'Gnielinski, V. (2013) IJHMT 63:134; VDI Heat Atlas ch. G1' },
   {
@@ -82,9 +82,9 @@ const THERMAL_METHODS = (segments: number, airMixing: 'strip' | 'staggered', fin
     source: fin === 'wavy' ? 'Wang, C.C., Hwang, Y.M., Lin, Y.T. (2002) Int. J. Refrig. 25:673' : 'Wang, C.C., Chi, K.Y., Chang, C.J. (2000) IJHMT 43:2693',
   },
   { topic: 'fin efficiency', method: 'Schmidt equivalent circular fin; wet fins with the Threlkeld parameter, c_s,f taken between the mean water temperature and the entering dew point (our choice)', source: 'Schmidt, T.E. (1949) Refrig. Eng. 57:351; Threlkeld, J.L. (1970)' },
-  { topic: 'air properties and flow', method: 'air mass flow = entering moist density × face velocity × face area; transport properties at the mean of entering and leaving air', source: 'ENGINEERING.md v1 decisions 1 and 13; US Standard Atmosphere 1976 (Sutherland)' },
-  { topic: 'air pressure drop', method: 'Kays & London core equation with Wang f; condensing coils: dry value × 1.25 (an estimate)', source: 'Kays, W.M., London, A.L. (1984) Compact Heat Exchangers; ENGINEERING.md v1 decision 9' },
-  { topic: 'turndown', method: 'every flow fraction 0.1–1.0 and the minimum flow fraction solved in full (thermal and hydraulic) with the entering temperatures held; part-load points settled to 0.1 % capacity (design point 0.01 %)', source: 'ENGINEERING.md section 5 item 1' },
+  { topic: 'air properties and flow', method: 'air mass flow = entering moist density × face velocity × face area; transport properties at the mean of entering and leaving air', source: 'ASHRAE Fundamentals 2017 ch. 1; US Standard Atmosphere 1976' },
+  { topic: 'air pressure drop', method: 'Kays & London core equation with Wang f; condensing coils: dry value × 1.25 (an estimate)', source: 'Kays & London (1984) Compact Heat Exchangers; wet factor an estimate' },
+  { topic: 'turndown', method: 'every flow fraction 0.1–1.0 and the minimum flow fraction solved in full (thermal and hydraulic) with the entering temperatures held; part-load points settled to 0.1 % capacity (design point 0.01 %)', source: 'Tubeloom method; regime bounds per Gnielinski (2013)' },
 ];
 
 function emptyResult(valid: boolean, circuits: CircuitResult[], warnings: ResultWarning[]): SolveResult {
