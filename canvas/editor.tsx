@@ -11,7 +11,7 @@ import type { Topology } from '@/lib/engine/topology';
 import { sheetAnalysis, tubeTemperatures } from './analysis';
 import { viridis } from './colormap';
 import { buildDrawing, buildSheetLayout, tubeKey } from './render-model';
-import { activeFace, type Selection } from './session';
+import { activeFace, type FaceShown, type Selection, type Tool } from './session';
 import { shortcutFor, shortcutTable } from './shortcuts';
 import type { EditorStore } from './store';
 import { EditorToolbar } from './toolbar';
@@ -110,6 +110,18 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
     return () => window.removeEventListener('keydown', onKey);
   }, [keyboard, store, fit, gestures]);
 
+  // Stable handlers, so the memoised toolbar skips the re-render of an edit.
+  const toolbarActions = useMemo(
+    () => ({
+      onTool: (t: Tool) => store.getState().setTool(t),
+      onFace: (f: FaceShown) => store.getState().setFace(f),
+      onUndo: () => store.getState().undo(),
+      onRedo: () => store.getState().redo(),
+      onTemperature: () => setTemperatureOn((on) => !on),
+      onHelp: () => setHelpOpen(true),
+    }),
+    [store],
+  );
   const infoTube =
     session.selection?.kind === 'tube' ? session.selection.tube : session.selection?.kind === 'bend' ? null : (session.pendingTube ?? hover);
   const readoutBend = useMemo(
@@ -131,13 +143,13 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
         canRedo={canRedo}
         temperature={showTemperature}
         temperatureAvailable={temperatures !== null}
-        onTool={(t) => store.getState().setTool(t)}
-        onFace={(f) => store.getState().setFace(f)}
-        onUndo={() => store.getState().undo()}
-        onRedo={() => store.getState().redo()}
+        onTool={toolbarActions.onTool}
+        onFace={toolbarActions.onFace}
+        onUndo={toolbarActions.onUndo}
+        onRedo={toolbarActions.onRedo}
         onFit={fit}
-        onTemperature={() => setTemperatureOn((on) => !on)}
-        onHelp={keyboard ? () => setHelpOpen(true) : undefined}
+        onTemperature={toolbarActions.onTemperature}
+        onHelp={keyboard ? toolbarActions.onHelp : undefined}
         compact={!keyboard}
       />
       <View

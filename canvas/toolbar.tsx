@@ -1,4 +1,5 @@
 /** The editor's toolbar: drawing tools, the end face shown, undo/redo, fit, temperature colours and help. */
+import { memo } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '@/components/ui/theme';
 import type { FaceShown, Tool } from './session';
@@ -54,7 +55,7 @@ export interface ToolbarProps {
   compact?: boolean;
 }
 
-export function EditorToolbar(p: ToolbarProps) {
+export const EditorToolbar = memo(function EditorToolbar(p: ToolbarProps) {
   const c = p.compact ?? false;
   return (
     <View style={[styles.bar, c && styles.barCompact]} accessibilityLabel="Editor tools" testID="editor-toolbar">
@@ -85,7 +86,7 @@ export function EditorToolbar(p: ToolbarProps) {
       </View>
     </View>
   );
-}
+});
 
 const styles = StyleSheet.create({
   bar: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, padding: space.sm, backgroundColor: colors.surface, borderBottomWidth: 1, borderBottomColor: colors.border },

@@ -91,6 +91,34 @@ const Tube = memo(function Tube({ look, r }: { look: TubeLook; r: number }) {
   );
 }, sameLook);
 
+const sameRef = (a: TubeRef, b: TubeRef) => a.row === b.row && a.tube === b.tube;
+
+/** Marks are rebuilt on every edit; comparing their fields lets React skip the ones that look the same. */
+const sameBend = (p: { bend: BendMark; r: number }, q: { bend: BendMark; r: number }) => {
+  const x = p.bend;
+  const y = q.bend;
+  return (
+    p.r === q.r &&
+    x.key === y.key &&
+    x.d === y.d &&
+    x.colour === y.colour &&
+    x.faint === y.faint &&
+    x.invalid === y.invalid &&
+    x.arrow === y.arrow &&
+    x.crossover === y.crossover &&
+    x.bridge === y.bridge &&
+    x.selected === y.selected &&
+    sameRef(x.a, y.a) &&
+    sameRef(x.b, y.b)
+  );
+};
+
+const sameStub = (p: { stub: StubMark; r: number }, q: { stub: StubMark; r: number }) => {
+  const x = p.stub;
+  const y = q.stub;
+  return p.r === q.r && x.key === y.key && x.d === y.d && x.head === y.head && x.colour === y.colour && x.faint === y.faint && x.labelX === y.labelX && x.labelY === y.labelY;
+};
+
 const Bend = memo(function Bend({ bend, r }: { bend: BendMark; r: number }) {
   const width = bend.faint ? r * 0.35 : r * 0.8;
   const id = `r${bend.a.row}-t${bend.a.tube}-r${bend.b.row}-t${bend.b.tube}`;
@@ -109,7 +137,7 @@ const Bend = memo(function Bend({ bend, r }: { bend: BendMark; r: number }) {
       {bend.arrow && !bend.faint ? <Path d={bend.arrow} fill="#0E2A33" /> : null}
     </G>
   );
-});
+}, sameBend);
 
 const Stub = memo(function Stub({ stub, r }: { stub: StubMark; r: number }) {
   return (
@@ -121,7 +149,7 @@ const Stub = memo(function Stub({ stub, r }: { stub: StubMark; r: number }) {
       </SvgText>
     </G>
   );
-});
+}, sameStub);
 
 export interface TubeSheetProps {
   layout: SheetLayout;

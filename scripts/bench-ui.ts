@@ -73,49 +73,49 @@ function stats(xs: number[]) {
 
 const tube = (page: Page, t: TubeRef) => page.getByTestId(`tube-r${t.row}-t${t.tube}`);
 
-declare global {
-  interface Window {
-    __bench?: { t0: number | null; t1: number | null };
-  }
-}
+// The in-page scripts are plain strings: tsx would wrap functions written here in a helper the page lacks.
 
 /** Arms a timer: t0 at the next pointer release, t1 when the fresh results panel is on screen after it. */
-async function armResultsTimer(page: Page) {
-  await page.evaluate(() => {
-    const b = { t0: null as number | null, t1: null as number | null };
-    window.__bench = b;
-    const fresh = () => document.querySelector('[data-testid="results-fresh"]') !== null;
-    const observer = new MutationObserver(() => {
-      if (b.t0 !== null && b.t1 === null && fresh()) {
-        b.t1 = performance.now();
-        observer.disconnect();
-      }
-    });
-    window.addEventListener('pointerup', () => (b.t0 = performance.now()), { capture: true, once: true });
-    observer.observe(document.body, { subtree: true, childList: true, attributes: true });
+const ARM_RESULTS_TIMER = `(() => {
+  const b = { t0: null, t1: null };
+  window.__bench = b;
+  const observer = new MutationObserver(() => {
+    if (b.t0 !== null && b.t1 === null && document.querySelector('[data-testid="results-fresh"]')) {
+      b.t1 = performance.now();
+      observer.disconnect();
+    }
   });
-}
+  window.addEventListener('pointerup', () => { b.t0 = performance.now(); }, { capture: true, once: true });
+  observer.observe(document.body, { subtree: true, childList: true, attributes: true });
+})()`;
 
 /** Arms a timer: t0 at the next pointer release, t1 at the animation frame after the sheet's DOM first changes. */
-async function armRenderTimer(page: Page) {
-  await page.evaluate(() => {
-    const b = { t0: null as number | null, t1: null as number | null };
-    window.__bench = b;
-    const sheet = document.querySelector('[data-testid="tube-sheet"]');
-    if (!sheet) throw new Error('no tube sheet on the page');
-    const observer = new MutationObserver(() => {
-      if (b.t0 === null) return;
-      observer.disconnect();
-      requestAnimationFrame(() => (b.t1 = performance.now()));
-    });
-    window.addEventListener('pointerup', () => (b.t0 = performance.now()), { capture: true, once: true });
-    observer.observe(sheet, { subtree: true, childList: true, attributes: true, characterData: true });
+const ARM_RENDER_TIMER = `(() => {
+  const b = { t0: null, t1: null };
+  window.__bench = b;
+  const sheet = document.querySelector('[data-testid="tube-sheet"]');
+  if (!sheet) throw new Error('no tube sheet on the page');
+  const observer = new MutationObserver(() => {
+    if (b.t0 === null) return;
+    observer.disconnect();
+    requestAnimationFrame(() => { b.t1 = performance.now(); });
   });
-}
+  window.addEventListener('pointerup', () => { b.t0 = performance.now(); }, { capture: true, once: true });
+  observer.observe(sheet, { subtree: true, childList: true, attributes: true, characterData: true });
+})()`;
 
+const armResultsTimer = (page: Page) => page.evaluate(ARM_RESULTS_TIMER);
+const armRenderTimer = (page: Page) => page.evaluate(ARM_RENDER_TIMER);
+
+/** Polls the armed timer (the times are taken in the page, so the polling does not blur them). */
 async function readTimer(page: Page): Promise<number> {
-  await page.waitForFunction(() => window.__bench?.t1 !== null && window.__bench?.t1 !== undefined, undefined, { timeout: 30_000 });
-  return page.evaluate(() => window.__bench!.t1! - window.__bench!.t0!);
+  const deadline = Date.now() + 30_000;
+  while (Date.now() < deadline) {
+    const ms = (await page.evaluate('window.__bench && window.__bench.t1 !== null ? window.__bench.t1 - window.__bench.t0 : null')) as number | null;
+    if (ms !== null) return ms;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  throw new Error('the timed change did not show within 30 s');
 }
 
 async function main() {

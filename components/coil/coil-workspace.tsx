@@ -95,24 +95,31 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
     [store],
   );
 
-  const editor = (
-    <CircuitEditor store={store} topology={live.topology} result={live.fresh ? live.result : null} formatTemperature={formatTemperature} keyboard={isWide} />
+  // Elements kept between renders: an edit re-renders the workspace, and React skips children whose element is
+  // the same object (the forms subscribe to their own part of the document).
+  const editor = useMemo(
+    () => <CircuitEditor store={store} topology={live.topology} result={live.fresh ? live.result : null} formatTemperature={formatTemperature} keyboard={isWide} />,
+    [store, live.topology, live.fresh, live.result, formatTemperature, isWide],
   );
-  const results = (
-    <>
-      <ResultsPanel live={live} system={unitSystem} onSelectIssue={onSelectIssue} onSelectCircuit={onSelectCircuit} />
-      {extraPanels ? (
-        <View style={styles.extra} testID="workspace-extra-panels">
-          <Text role="heading" aria-level={2} style={[type.smallStrong, styles.extraTitle]}>
-            Versions & files
-          </Text>
-          {extraPanels}
-        </View>
-      ) : null}
-    </>
+  const results = useMemo(
+    () => (
+      <>
+        <ResultsPanel live={live} system={unitSystem} onSelectIssue={onSelectIssue} onSelectCircuit={onSelectCircuit} />
+        {extraPanels ? (
+          <View style={styles.extra} testID="workspace-extra-panels">
+            <Text role="heading" aria-level={2} style={[type.smallStrong, styles.extraTitle]}>
+              Versions & files
+            </Text>
+            {extraPanels}
+          </View>
+        ) : null}
+      </>
+    ),
+    [live, unitSystem, onSelectIssue, onSelectCircuit, extraPanels],
   );
-  const geometryForm = <GeometryForm store={store} system={unitSystem} fieldErrors={fieldErrors} />;
-  const conditionsForm = <ConditionsForm store={store} system={unitSystem} fieldErrors={fieldErrors} />;
+  const geometryForm = useMemo(() => <GeometryForm store={store} system={unitSystem} fieldErrors={fieldErrors} />, [store, unitSystem, fieldErrors]);
+  const conditionsForm = useMemo(() => <ConditionsForm store={store} system={unitSystem} fieldErrors={fieldErrors} />, [store, unitSystem, fieldErrors]);
+  const summary = useMemo(() => <CircuitSummary topology={live.topology} />, [live.topology]);
 
   const header = (
     <View style={styles.header}>
@@ -171,7 +178,7 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
           </View>
           <View style={styles.centre}>
             {editor}
-            <CircuitSummary topology={live.topology} />
+            {summary}
           </View>
           <View style={[styles.side, styles.results]}>
             <ScrollView contentContainerStyle={styles.sideContent}>{results}</ScrollView>
@@ -199,7 +206,7 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
           testID="phone-tabs"
         />
       </View>
-      <CircuitSummary topology={live.topology} />
+      {summary}
       {phoneTab === 'sheet' ? (
         <View style={styles.phoneEditor}>{editor}</View>
       ) : (

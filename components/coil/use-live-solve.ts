@@ -14,6 +14,9 @@ import type { CoilDocument, SolveResult } from '@/lib/engine/types';
 
 export const LIVE_SOLVE_DELAY_MS = 150;
 
+/** One shared empty list, so that what depends on the issues does not change when a valid drawing is edited. */
+const NO_ISSUES: LiveSolve['documentIssues'] = [];
+
 export interface LiveSolve {
   topology: Topology;
   /** Field messages when the document fails validation (then nothing is solved). */
@@ -32,7 +35,7 @@ export function useLiveSolve(coilId: string, document: CoilDocument, version: nu
   const topology = useMemo(() => traceCircuits(document), [document]);
   const issues = useMemo(() => {
     const parsed = coilDocumentSchema.safeParse(document);
-    return parsed.success ? [] : parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
+    return parsed.success ? NO_ISSUES : parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
   }, [document]);
   const solvable = topology.valid && issues.length === 0;
 
@@ -60,13 +63,12 @@ export function useLiveSolve(coilId: string, document: CoilDocument, version: nu
 
   const data = query.data;
   const fresh = solvable && data !== undefined && data.version === version && !query.isPlaceholderData;
-  return {
-    topology,
-    documentIssues: issues,
-    result: data?.result ?? null,
-    fresh,
-    resultVersion: data?.version ?? null,
-    solving: solvable && (!fresh || query.isFetching),
-    error: query.error ? query.error.message : null,
-  };
+  const result = data?.result ?? null;
+  const resultVersion = data?.version ?? null;
+  const solving = solvable && (!fresh || query.isFetching);
+  const error = query.error ? query.error.message : null;
+  return useMemo(
+    () => ({ topology, documentIssues: issues, result, fresh, resultVersion, solving, error }),
+    [topology, issues, result, fresh, resultVersion, solving, error],
+  );
 }

@@ -6,6 +6,7 @@
  * a document that passed the zod schema: out-of-range references are reported, loops are bounded by the tube count.
  */
 import { areNeighbours, bendRadius_m, halfPitchLevel } from '@/lib/engine/geometry';
+import { crossingPairs, type BendFrame } from '@/lib/engine/topology-crossings';
 import type {
   Arrangement,
   CoilDocument,
@@ -85,12 +86,6 @@ export function tubeIndex(g: Pick<Geometry, 'tubesPerRow'>, ref: TubeRef): numbe
 
 export const tubeLabel = (t: TubeRef): string => `row ${t.row} tube ${t.tube}`;
 const faceWord = (f: EndFace): string => (f === 'connection' ? 'connection end' : 'opposite end');
-const otherFace = (f: EndFace): EndFace => (f === 'connection' ? 'opposite' : 'connection');
-
-type Connection =
-  | { kind: 'bend'; bend: number }
-  | { kind: 'supply'; stub: number }
-  | { kind: 'return'; stub: number };
 
 /**
  * Flow arrangement of a circuit from its row sequence in water order (ENGINEERING.md 2.3): n_against = steps toward
@@ -162,236 +157,239 @@ const sameTube = (a: TubeRef, b: TubeRef) => a.row === b.row && a.tube === b.tub
  * Trace and validate the circuiting of a coil document (ENGINEERING.md 2.1 T1-T7, 2.3, 2.4). Returns the circuits
  * that run from a supply stub to a return stub, every error found (the drawing is valid only when there are none),
  * and the design warnings of the traced circuits.
+ *
+ * Runs on every edit in the editor, so the bookkeeping is on integer tube indices and typed arrays: connection ids
+ * are bend i -> i, supply stub j -> nBends + j, return stub j -> nBends + nSupplies + j, kept per tube end in
+ * singly linked lists in the order they were drawn (the order error messages list them in).
  */
 export function traceCircuits(doc: CoilDocument): Topology {
   const g = doc.geometry;
   const { rows, tubesPerRow } = g;
   const tubeCount = rows * tubesPerRow;
   const errors: TopologyError[] = [];
-  const warnings: ResultWarning[] = [];
   const bends = doc.circuiting.bends;
   const supplies = doc.circuiting.supply;
   const returns = doc.circuiting.return;
+  const nBends = bends.length;
+  const nSupplies = supplies.length;
+  const firstReturn = nBends + nSupplies;
 
   const inCoil = (t: TubeRef) =>
     Number.isInteger(t.row) && Number.isInteger(t.tube) && t.row >= 1 && t.row <= rows && t.tube >= 1 && t.tube <= tubesPerRow;
-  const endKey = (t: TubeRef, f: EndFace) => 2 * tubeIndex(g, t) + (f === 'connection' ? 0 : 1);
+  const indexOf = (t: TubeRef) => (t.row - 1) * tubesPerRow + (t.tube - 1);
+  const faceBit = (f: EndFace) => (f === 'connection' ? 0 : 1);
 
   // ---- index the connections on every tube end ----
-  const ends: Connection[][] = Array.from({ length: 2 * tubeCount }, () => []);
-  const bendUsable: boolean[] = bends.map(() => false);
-  bends.forEach((b, i) => {
+  const endCount = new Int32Array(2 * tubeCount);
+  const endHead = new Int32Array(2 * tubeCount).fill(-1);
+  const endTail = new Int32Array(2 * tubeCount).fill(-1);
+  const nodeConn = new Int32Array(2 * nBends + nSupplies + returns.length);
+  const nodeNext = new Int32Array(nodeConn.length).fill(-1);
+  let nodes = 0;
+  const link = (key: number, conn: number) => {
+    nodeConn[nodes] = conn;
+    if (endTail[key] < 0) endHead[key] = nodes;
+    else nodeNext[endTail[key]] = nodes;
+    endTail[key] = nodes;
+    endCount[key]++;
+    nodes++;
+  };
+
+  const bendUsable = new Uint8Array(nBends);
+  const tubeA = new Int32Array(nBends).fill(-1);
+  const tubeB = new Int32Array(nBends).fill(-1);
+  for (let i = 0; i < nBends; i++) {
+    const b = bends[i];
     if (!inCoil(b.a) || !inCoil(b.b)) {
       errors.push({ code: 'tube-outside-coil', message: `bend ${i + 1} names a tube outside the coil`, tubes: [b.a, b.b] });
-      return;
+      continue;
     }
     if (sameTube(b.a, b.b)) {
       errors.push({ code: 'bend-self', message: `a bend on the ${faceWord(b.end)} joins ${tubeLabel(b.a)} to itself`, tubes: [b.a] });
-      return;
+      continue;
     }
-    bendUsable[i] = true;
-    ends[endKey(b.a, b.end)].push({ kind: 'bend', bend: i });
-    ends[endKey(b.b, b.end)].push({ kind: 'bend', bend: i });
-  });
-  const stubUsable = (list: readonly Stub[], kind: 'supply' | 'return') =>
-    list.map((s, i) => {
+    bendUsable[i] = 1;
+    tubeA[i] = indexOf(b.a);
+    tubeB[i] = indexOf(b.b);
+    link(2 * tubeA[i] + faceBit(b.end), i);
+    link(2 * tubeB[i] + faceBit(b.end), i);
+  }
+  const stubUsable = (list: readonly Stub[], kind: 'supply' | 'return', firstId: number) => {
+    const usable = new Uint8Array(list.length);
+    for (let i = 0; i < list.length; i++) {
+      const s = list[i];
       if (!inCoil(s.tube)) {
         errors.push({ code: 'tube-outside-coil', message: `${kind} stub ${i + 1} names a tube outside the coil`, tubes: [s.tube] });
-        return false;
+        continue;
       }
-      ends[endKey(s.tube, s.end)].push(kind === 'supply' ? { kind: 'supply', stub: i } : { kind: 'return', stub: i });
-      return true;
-    });
-  const supplyUsable = stubUsable(supplies, 'supply');
-  const returnUsable = stubUsable(returns, 'return');
+      link(2 * indexOf(s.tube) + faceBit(s.end), firstId + i);
+      usable[i] = 1;
+    }
+    return usable;
+  };
+  const supplyUsable = stubUsable(supplies, 'supply', nBends);
+  const returnUsable = stubUsable(returns, 'return', firstReturn);
 
   const refOf = (idx: number): TubeRef => ({ row: Math.floor(idx / tubesPerRow) + 1, tube: (idx % tubesPerRow) + 1 });
-  const describe = (c: Connection) =>
-    c.kind === 'bend' ? 'a bend' : c.kind === 'supply' ? 'a supply stub' : 'a return stub';
-  ends.forEach((list, key) => {
-    if (list.length > 1) {
-      const t = refOf(key >> 1);
-      const face: EndFace = key % 2 === 0 ? 'connection' : 'opposite';
-      errors.push({
-        code: 'tube-end-conflict',
-        message: `${tubeLabel(t)} has ${list.length} connections on its ${faceWord(face)} (${list.map(describe).join(', ')}); a tube end takes one`,
-        tubes: [t],
-      });
-    }
-  });
+  const describe = (conn: number) => (conn < nBends ? 'a bend' : conn < firstReturn ? 'a supply stub' : 'a return stub');
+  for (let key = 0; key < 2 * tubeCount; key++) {
+    if (endCount[key] <= 1) continue;
+    const t = refOf(key >> 1);
+    const face: EndFace = key % 2 === 0 ? 'connection' : 'opposite';
+    const words: string[] = [];
+    for (let n = endHead[key]; n >= 0; n = nodeNext[n]) words.push(describe(nodeConn[n]));
+    errors.push({
+      code: 'tube-end-conflict',
+      message: `${tubeLabel(t)} has ${endCount[key]} connections on its ${faceWord(face)} (${words.join(', ')}); a tube end takes one`,
+      tubes: [t],
+    });
+  }
 
   // ---- T7: one header pair ----
-  const facesOf = (list: readonly Stub[], usable: boolean[]) => new Set(list.filter((_, i) => usable[i]).map((s) => s.end));
-  if (facesOf(supplies, supplyUsable).size > 1) {
+  const facesMixed = (list: readonly Stub[], usable: Uint8Array) => {
+    let connection = false;
+    let opposite = false;
+    for (let i = 0; i < list.length; i++) {
+      if (usable[i] === 0) continue;
+      if (list[i].end === 'connection') connection = true;
+      else opposite = true;
+    }
+    return connection && opposite;
+  };
+  if (facesMixed(supplies, supplyUsable)) {
     errors.push({ code: 'supply-faces-mixed', message: 'supply stubs sit on both end faces; all supply stubs must share one header (one end face)', tubes: supplies.map((s) => s.tube) });
   }
-  if (facesOf(returns, returnUsable).size > 1) {
+  if (facesMixed(returns, returnUsable)) {
     errors.push({ code: 'return-faces-mixed', message: 'return stubs sit on both end faces; all return stubs must share one header (one end face)', tubes: returns.map((s) => s.tube) });
   }
 
   // ---- follow the water from each supply stub ----
-  const owner = new Array<number>(tubeCount).fill(0); // provisional trace number (1-based) per tube
-  const bendUsed: boolean[] = bends.map(() => false);
-  const returnUsed: boolean[] = returns.map(() => false);
-  interface RawCircuit { supply: number; ret: number; tubes: TubeRef[]; bends: number[]; faces: EndFace[] }
+  const owner = new Int32Array(tubeCount); // provisional trace number (1-based) per tube
+  const bendUsed = new Uint8Array(nBends);
+  interface RawCircuit { supply: number; ret: number; tubes: TubeRef[]; bends: number[] }
   const complete: RawCircuit[] = [];
   let traceNo = 0;
 
-  supplies.forEach((s, si) => {
-    if (!supplyUsable[si]) return;
+  for (let si = 0; si < nSupplies; si++) {
+    if (supplyUsable[si] === 0) continue;
+    const s = supplies[si];
     traceNo++;
     const tubes: TubeRef[] = [];
-    const faces: EndFace[] = [];
     const path: number[] = [];
     let current = s.tube;
-    let entry: EndFace = s.end;
+    let idx = indexOf(current);
+    let entry = faceBit(s.end);
     for (let step = 0; step <= tubeCount; step++) {
-      const idx = tubeIndex(g, current);
       if (owner[idx] !== 0) {
         errors.push({
           code: 'tube-in-two-circuits',
           message: `${tubeLabel(current)} is reached by ${owner[idx] === traceNo ? 'the same circuit twice' : 'two circuits'}; each tube belongs to exactly one circuit`,
           tubes: [current],
         });
-        return;
+        break;
       }
       owner[idx] = traceNo;
       tubes.push(current);
-      faces.push(entry);
-      const exit = otherFace(entry);
-      const here = ends[endKey(current, exit)];
-      const ret = here.find((c) => c.kind === 'return');
-      if (ret && ret.kind === 'return') {
-        returnUsed[ret.stub] = true;
-        complete.push({ supply: si, ret: ret.stub, tubes, bends: path, faces });
-        return;
+      const exit = 1 - entry;
+      const key = 2 * idx + exit;
+      // First return stub on this end, else the first bend not yet used, else note whether a supply stub sits here.
+      let ret = -1;
+      let bend = -1;
+      let supplyHere = false;
+      for (let n = endHead[key]; n >= 0; n = nodeNext[n]) {
+        const conn = nodeConn[n];
+        if (conn >= firstReturn) {
+          ret = conn - firstReturn;
+          break;
+        }
+        if (conn < nBends) {
+          if (bend < 0 && bendUsed[conn] === 0) bend = conn;
+        } else supplyHere = true;
       }
-      const bend = here.find((c) => c.kind === 'bend' && !bendUsed[c.bend]);
-      if (bend && bend.kind === 'bend') {
-        bendUsed[bend.bend] = true;
-        path.push(bend.bend);
-        const b = bends[bend.bend];
-        current = sameTube(b.a, current) ? b.b : b.a;
+      if (ret >= 0) {
+        complete.push({ supply: si, ret, tubes, bends: path });
+        break;
+      }
+      if (bend >= 0) {
+        bendUsed[bend] = 1;
+        path.push(bend);
+        const b = bends[bend];
+        if (tubeA[bend] === idx) {
+          current = b.b;
+          idx = tubeB[bend];
+        } else {
+          current = b.a;
+          idx = tubeA[bend];
+        }
         entry = exit;
         continue;
       }
-      if (here.some((c) => c.kind === 'supply')) {
+      const exitWord = faceWord(exit === 0 ? 'connection' : 'opposite');
+      if (supplyHere) {
         errors.push({
           code: 'supply-at-outlet',
-          message: `the water entering at ${tubeLabel(s.tube)} leaves ${tubeLabel(current)} at the ${faceWord(exit)}, where a supply stub sits; it needs a return stub or a bend there`,
+          message: `the water entering at ${tubeLabel(s.tube)} leaves ${tubeLabel(current)} at the ${exitWord}, where a supply stub sits; it needs a return stub or a bend there`,
           tubes: [s.tube, current],
         });
-        return;
+        break;
       }
       errors.push({
         code: 'circuit-no-return',
-        message: `the water entering at ${tubeLabel(s.tube)} reaches the ${faceWord(exit)} of ${tubeLabel(current)} and finds neither a bend nor a return stub`,
+        message: `the water entering at ${tubeLabel(s.tube)} reaches the ${exitWord} of ${tubeLabel(current)} and finds neither a bend nor a return stub`,
         tubes: [s.tube, current],
       });
-      return;
+      break;
     }
-  });
-  if (supplies.length === 0) errors.push({ code: 'no-circuits', message: 'the drawing has no supply stub, so no circuit can be traced' });
+  }
+  if (nSupplies === 0) errors.push({ code: 'no-circuits', message: 'the drawing has no supply stub, so no circuit can be traced' });
 
   // ---- what the water never reached ----
-  const bendTouchesTraced = (i: number) =>
-    owner[tubeIndex(g, bends[i].a)] !== 0 || owner[tubeIndex(g, bends[i].b)] !== 0;
-  bends.forEach((b, i) => {
-    if (bendUsable[i] && !bendUsed[i] && bendTouchesTraced(i)) {
+  // Usable bends the water did not pass through: 1 when one of its tubes is traced (dangling off a circuit), 2 when
+  // neither is (part of an unfed group).
+  const idle = new Uint8Array(nBends);
+  for (let i = 0; i < nBends; i++) {
+    if (bendUsable[i] === 0 || bendUsed[i] === 1) continue;
+    idle[i] = owner[tubeA[i]] !== 0 || owner[tubeB[i]] !== 0 ? 1 : 2;
+    if (idle[i] === 1) {
+      const b = bends[i];
       errors.push({
         code: 'bend-dangling',
         message: `the bend on the ${faceWord(b.end)} between ${tubeLabel(b.a)} and ${tubeLabel(b.b)} sits where the water does not arrive`,
         tubes: [b.a, b.b],
       });
     }
-  });
-  // Components of untraced tubes joined by untraced bends.
-  const parent = Array.from({ length: tubeCount }, (_, i) => i);
-  const find = (i: number): number => {
-    while (parent[i] !== i) {
-      parent[i] = parent[parent[i]];
-      i = parent[i];
-    }
-    return i;
-  };
-  bends.forEach((b, i) => {
-    if (bendUsable[i] && !bendUsed[i] && !bendTouchesTraced(i)) parent[find(tubeIndex(g, b.a))] = find(tubeIndex(g, b.b));
-  });
-  interface Leftover { tubes: number[]; bends: number[]; returns: number; ends: number }
-  const groups = new Map<number, Leftover>();
-  for (let idx = 0; idx < tubeCount; idx++) {
-    if (owner[idx] !== 0) continue;
-    const root = find(idx);
-    const grp = groups.get(root) ?? { tubes: [], bends: [], returns: 0, ends: 0 };
-    grp.tubes.push(idx);
-    for (const key of [2 * idx, 2 * idx + 1]) {
-      const list = ends[key];
-      if (list.length > 0) grp.ends++;
-      grp.returns += list.filter((c) => c.kind === 'return').length;
-    }
-    groups.set(root, grp);
   }
-  bends.forEach((b, i) => {
-    if (bendUsable[i] && !bendUsed[i] && !bendTouchesTraced(i)) groups.get(find(tubeIndex(g, b.a)))?.bends.push(i);
-  });
-  const untouched: TubeRef[] = [];
-  for (const grp of groups.values()) {
-    const tubes = grp.tubes.map(refOf);
-    const list = tubes.slice(0, 12).map(tubeLabel).join(', ') + (tubes.length > 12 ? ', ...' : '');
-    if (grp.ends === 0) {
-      untouched.push(...tubes);
-    } else if (grp.returns > 0) {
-      errors.push({ code: 'circuit-no-supply', message: `tubes ${list} lead to a return stub but no supply stub feeds them`, tubes });
-    } else if (grp.bends.length === grp.tubes.length && grp.ends === 2 * grp.tubes.length) {
-      errors.push({ code: 'closed-loop', message: `tubes ${list} are joined into a closed loop with no header`, tubes });
-    } else {
-      for (const i of grp.bends) {
-        const b = bends[i];
-        errors.push({
-          code: 'bend-dangling',
-          message: `the bend on the ${faceWord(b.end)} between ${tubeLabel(b.a)} and ${tubeLabel(b.b)} is not fed from any supply stub`,
-          tubes: [b.a, b.b],
-        });
-      }
-    }
-  }
-
-  if (untouched.length > 0) {
-    // One error for all bare tubes: a fresh sheet would otherwise list every tube separately.
-    const names = untouched.slice(0, 12).map(tubeLabel).join(', ') + (untouched.length > 12 ? ', ...' : '');
-    errors.push({
-      code: 'tube-unused',
-      message: untouched.length === 1 ? `${names} belongs to no circuit (no bend or stub on either end)` : `${untouched.length} tubes belong to no circuit (no bend or stub on either end): ${names}`,
-      tubes: untouched,
-    });
-  }
+  const untraced = owner.indexOf(0) >= 0;
+  if (untraced) leftoverErrors();
 
   // ---- T5: crossing bends on one face ----
-  // Segment intersection is invariant under positive scaling of either axis, so test in the exact integer frame
-  // (x = row - 1, y = half-pitch level) instead of metres.
-  const pos = (t: TubeRef): Point => ({ x: t.row - 1, y: halfPitchLevel(t) });
+  const frame: BendFrame = {
+    usable: bendUsable,
+    tubeA,
+    tubeB,
+    ax: new Int32Array(nBends),
+    ay: new Int32Array(nBends),
+    bx: new Int32Array(nBends),
+    by: new Int32Array(nBends),
+    rows,
+  };
+  for (let i = 0; i < nBends; i++) {
+    if (bendUsable[i] === 0) continue;
+    const b = bends[i];
+    frame.ax[i] = b.a.row - 1;
+    frame.ay[i] = halfPitchLevel(b.a);
+    frame.bx[i] = b.b.row - 1;
+    frame.by[i] = halfPitchLevel(b.b);
+  }
   for (const face of ['connection', 'opposite'] as const) {
-    // Sort by the lower x of each segment so the inner loop stops once segments lie wholly to the right.
-    const segs = bends
-      .map((b, i) => ({ b, i, p: pos(b.a), q: pos(b.b) }))
-      .filter((s) => bendUsable[s.i] && s.b.end === face && !s.b.crossover)
-      .map((s) => ({ ...s, x0: Math.min(s.p.x, s.q.x), x1: Math.max(s.p.x, s.q.x), y0: Math.min(s.p.y, s.q.y), y1: Math.max(s.p.y, s.q.y) }))
-      .sort((u, v) => u.x0 - v.x0 || u.i - v.i);
-    for (let p = 0; p < segs.length; p++) {
-      const A = segs[p];
-      for (let q = p + 1; q < segs.length && segs[q].x0 <= A.x1; q++) {
-        const B = segs[q];
-        if (B.y0 > A.y1 || B.y1 < A.y0) continue;
-        const [a, b] = A.i < B.i ? [A.b, B.b] : [B.b, A.b];
-        if (sameTube(a.a, b.a) || sameTube(a.a, b.b) || sameTube(a.b, b.a) || sameTube(a.b, b.b)) continue;
-        if (segmentsIntersect(A.p, A.q, B.p, B.q)) {
-          errors.push({
-            code: 'bends-cross',
-            message: `on the ${faceWord(face)} the bend ${tubeLabel(a.a)}-${tubeLabel(a.b)} crosses the bend ${tubeLabel(b.a)}-${tubeLabel(b.b)}; mark one as a crossover or reroute`,
-            tubes: [a.a, a.b, b.a, b.b],
-          });
-        }
-      }
+    for (const [lo, hi] of crossingPairs(bends, face, frame)) {
+      const a = bends[lo];
+      const b = bends[hi];
+      errors.push({
+        code: 'bends-cross',
+        message: `on the ${faceWord(face)} the bend ${tubeLabel(a.a)}-${tubeLabel(a.b)} crosses the bend ${tubeLabel(b.a)}-${tubeLabel(b.b)}; mark one as a crossover or reroute`,
+        tubes: [a.a, a.b, b.a, b.b],
+      });
     }
   }
 
@@ -405,14 +403,14 @@ export function traceCircuits(doc: CoilDocument): Topology {
   const tubeCircuit = new Array<number>(tubeCount).fill(0);
   const circuits: TracedCircuit[] = ordered.map(({ c }, k) => {
     const index = k + 1;
-    for (const t of c.tubes) tubeCircuit[tubeIndex(g, t)] = index;
     const supply = supplies[c.supply];
     const ret = returns[c.ret];
-    const traced: TracedBend[] = c.bends.map((bi, j) => {
-      const b = bends[bi];
+    const traced: TracedBend[] = new Array<TracedBend>(c.bends.length);
+    for (let j = 0; j < c.bends.length; j++) {
+      const b = bends[c.bends[j]];
       const from = c.tubes[j];
       const to = c.tubes[j + 1];
-      return {
+      traced[j] = {
         end: b.end,
         a: from,
         b: to,
@@ -421,11 +419,19 @@ export function traceCircuits(doc: CoilDocument): Topology {
         kind: b.end === 'opposite' ? 'hairpin' : 'return-bend',
         adjacent: areNeighbours(from, to),
       };
-    });
-    const { arrangement, counterflowIndex } = classifyArrangement(c.tubes.map((t) => t.row));
-    const levels = c.tubes.map(halfPitchLevel);
-    const lowest = Math.max(...levels);
-    const highest = Math.min(...levels);
+    }
+    const rowSequence = new Array<number>(c.tubes.length);
+    let lowest = -Infinity;
+    let highest = Infinity;
+    for (let j = 0; j < c.tubes.length; j++) {
+      const t = c.tubes[j];
+      tubeCircuit[indexOf(t)] = index;
+      rowSequence[j] = t.row;
+      const level = halfPitchLevel(t);
+      if (level > lowest) lowest = level;
+      if (level < highest) highest = level;
+    }
+    const { arrangement, counterflowIndex } = classifyArrangement(rowSequence);
     const first = c.tubes[0];
     const last = c.tubes[c.tubes.length - 1];
     return {
@@ -446,8 +452,69 @@ export function traceCircuits(doc: CoilDocument): Topology {
     };
   });
 
-  warnings.push(...circuitWarnings(doc, circuits));
+  const warnings = circuitWarnings(doc, circuits);
   return { valid: errors.length === 0, errors, warnings, circuits, tubeCircuit };
+
+  /** Errors of the tubes no supply reached: groups joined by idle bends are unfed, loops, or bare tubes. */
+  function leftoverErrors(): void {
+    const parent = new Int32Array(tubeCount);
+    for (let i = 0; i < tubeCount; i++) parent[i] = i;
+    const find = (i: number): number => {
+      while (parent[i] !== i) {
+        parent[i] = parent[parent[i]];
+        i = parent[i];
+      }
+      return i;
+    };
+    for (let i = 0; i < nBends; i++) if (idle[i] === 2) parent[find(tubeA[i])] = find(tubeB[i]);
+    interface Leftover { tubes: number[]; bends: number[]; returns: number; ends: number }
+    const groups = new Map<number, Leftover>();
+    for (let idx = 0; idx < tubeCount; idx++) {
+      if (owner[idx] !== 0) continue;
+      const root = find(idx);
+      let grp = groups.get(root);
+      if (!grp) {
+        grp = { tubes: [], bends: [], returns: 0, ends: 0 };
+        groups.set(root, grp);
+      }
+      grp.tubes.push(idx);
+      for (let key = 2 * idx; key <= 2 * idx + 1; key++) {
+        if (endCount[key] > 0) grp.ends++;
+        for (let n = endHead[key]; n >= 0; n = nodeNext[n]) if (nodeConn[n] >= firstReturn) grp.returns++;
+      }
+    }
+    for (let i = 0; i < nBends; i++) if (idle[i] === 2) groups.get(find(tubeA[i]))?.bends.push(i);
+    const untouched: TubeRef[] = [];
+    for (const grp of groups.values()) {
+      const tubes = grp.tubes.map(refOf);
+      const list = tubes.slice(0, 12).map(tubeLabel).join(', ') + (tubes.length > 12 ? ', ...' : '');
+      if (grp.ends === 0) {
+        for (const t of tubes) untouched.push(t);
+      } else if (grp.returns > 0) {
+        errors.push({ code: 'circuit-no-supply', message: `tubes ${list} lead to a return stub but no supply stub feeds them`, tubes });
+      } else if (grp.bends.length === grp.tubes.length && grp.ends === 2 * grp.tubes.length) {
+        errors.push({ code: 'closed-loop', message: `tubes ${list} are joined into a closed loop with no header`, tubes });
+      } else {
+        for (const i of grp.bends) {
+          const b = bends[i];
+          errors.push({
+            code: 'bend-dangling',
+            message: `the bend on the ${faceWord(b.end)} between ${tubeLabel(b.a)} and ${tubeLabel(b.b)} is not fed from any supply stub`,
+            tubes: [b.a, b.b],
+          });
+        }
+      }
+    }
+    if (untouched.length > 0) {
+      // One error for all bare tubes: a fresh sheet would otherwise list every tube separately.
+      const names = untouched.slice(0, 12).map(tubeLabel).join(', ') + (untouched.length > 12 ? ', ...' : '');
+      errors.push({
+        code: 'tube-unused',
+        message: untouched.length === 1 ? `${names} belongs to no circuit (no bend or stub on either end)` : `${untouched.length} tubes belong to no circuit (no bend or stub on either end): ${names}`,
+        tubes: untouched,
+      });
+    }
+  }
 }
 
 function warn(code: string, severity: Severity, message: string, circuits?: number[], tubes?: TubeRef[]): ResultWarning {
