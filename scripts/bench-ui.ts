@@ -91,13 +91,14 @@ const ARM_RESULTS_TIMER = `(() => {
 
 /** Arms a timer: t0 at the next pointer release, t1 at the animation frame after the sheet's DOM first changes. */
 const ARM_RENDER_TIMER = `(() => {
-  const b = { t0: null, t1: null };
+  const b = { t0: null, tm: null, t1: null };
   window.__bench = b;
   const sheet = document.querySelector('[data-testid="tube-sheet"]');
   if (!sheet) throw new Error('no tube sheet on the page');
   const observer = new MutationObserver(() => {
     if (b.t0 === null) return;
     observer.disconnect();
+    b.tm = performance.now();
     requestAnimationFrame(() => { b.t1 = performance.now(); });
   });
   window.addEventListener('pointerup', () => { b.t0 = performance.now(); }, { capture: true, once: true });
@@ -168,31 +169,47 @@ async function main() {
       solveTimes.push(await readTimer(page));
     }
 
+    // For reference: the server's share of (a), the same document posted to /api/solve from Node.
+    const serverTimes: number[] = [];
+    for (let i = 0; i < 8; i++) {
+      const t0 = performance.now();
+      const res = await api.post('/api/solve', { data: { document: small }, headers });
+      if (!res.ok()) throw new Error(`solve failed: ${res.status()}`);
+      serverTimes.push(performance.now() - t0);
+    }
+
     // (b) render time of one edit on 12 x 60: erase a tube end, then undo; each is one edit.
     const large = benchDocument(12, 60);
     const target = large.circuiting.bends.find((b) => b.end === 'opposite')!.a;
     await open(await createCoil(12, 60));
     await page.getByTestId('tool-erase').click();
     const renderTimes: number[] = [];
+    const commitTimes: number[] = [];
     for (let i = 0; i < RENDER_EDITS / 2; i++) {
       await armRenderTimer(page);
       await tube(page, target).click();
       renderTimes.push(await readTimer(page));
+      commitTimes.push((await page.evaluate('window.__bench.tm - window.__bench.t0')) as number);
       await armRenderTimer(page);
       await page.getByTestId('undo').click();
       renderTimes.push(await readTimer(page));
+      commitTimes.push((await page.evaluate('window.__bench.tm - window.__bench.t0')) as number);
       await page.getByTestId('results-fresh').waitFor(); // let the solve land before the next edit
     }
 
     const model = measureEditRenderModel(12, 60);
     const a = stats(solveTimes);
     const b = stats(renderTimes);
+    const srv = stats(serverTimes);
+    const commit = stats(commitTimes);
     const row = (what: string, n: number, median: number, p90: number, target: string) =>
       `${what.padEnd(44)} ${String(n).padStart(3)} ${median.toFixed(1).padStart(9)} ${p90.toFixed(1).padStart(9)}   ${target}`;
     console.log('');
     console.log(`${'measurement'.padEnd(44)} ${'n'.padStart(3)} ${'median ms'.padStart(9)} ${'p90 ms'.padStart(9)}   target`);
     console.log(row('(a) bend click -> fresh results, 6 x 24', a.n, a.median, a.p90, `< ${TARGET_SOLVE_MS} ms on loopback`));
+    console.log(row('    of which POST /api/solve alone, 6 x 24', srv.n, srv.median, srv.p90, '(server solve + HTTP)'));
     console.log(row('(b) edit render in page, 12 x 60', b.n, b.median, b.p90, `< ${TARGET_RENDER_MS} ms`));
+    console.log(row('    of which release -> DOM changed (React)', commit.n, commit.median, commit.p90, ''));
     console.log(row('render model per edit (canvas/perf), 12 x 60', model.edits, model.median_ms, model.max_ms, '(max in the p90 column)'));
     console.log('');
     const pass = a.median < TARGET_SOLVE_MS && b.median < TARGET_RENDER_MS;

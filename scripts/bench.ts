@@ -147,8 +147,8 @@ export function engineBenchmarks(): Timing[] {
   const big = unequalCoil();
   const passes = new Set(traceCircuits(big).circuits.map((c) => c.passes));
   if (passes.size < 2 || !traceCircuits(big).valid) throw new Error('bench coil should have valid circuits of unequal length');
-  out.push(measure('topology + hydraulics, 12 rows x 60 high, 40 unequal circuits', () => topologyAndHydraulics(big), 30, 5, 5));
-  out.push(measure('  of which topology (traceCircuits)', () => traceCircuits(big), 30, 5));
+  out.push(measure('topology + hydraulics, 12 rows x 60 high, 40 unequal circuits', () => topologyAndHydraulics(big), 100, 30, 5));
+  out.push(measure('  of which topology (traceCircuits)', () => traceCircuits(big), 100, 30));
   const traced = traceCircuits(big);
   const bigDerived = deriveGeometry(big.geometry);
   const bigFluid = big.conditions.fluid;
@@ -160,7 +160,7 @@ export function engineBenchmarks(): Timing[] {
     ),
   );
   const wet8 = chilledWaterCoil(8, 40, 40);
-  out.push(measure('thermal solve, 8 x 40 wet chilled water, 6 segments', () => thermalSolve(wet8), 15, 3, 50));
+  out.push(measure('thermal solve, 8 x 40 wet chilled water, 6 segments', () => thermalSolve(wet8), 21, 5, 50));
   out.push(measure('thermal solve, 12 x 60 wet chilled water, 6 segments', () => thermalSolve(chilledWaterCoil(12, 60, 60)), 7, 2));
   for (const segments of [1, 6, 20]) {
     out.push(measure(`thermal solve, 8 x 40 wet, ${segments} segment${segments > 1 ? 's' : ''} per tube`, () => thermalSolve(chilledWaterCoil(8, 40, 40, segments)), 7, 2));

@@ -3,7 +3,7 @@
  * warnings (tap one to highlight its tubes and circuits on the sheet) and the turndown chart. Numbers are
  * right-aligned in the mono face and carry units in the user's system.
  */
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { Banner } from '@/components/ui/banner';
 import { useBreakpoint } from '@/components/ui/use-breakpoint';
@@ -26,7 +26,7 @@ function Figure({ label, value, testID }: { label: string; value: string; testID
   );
 }
 
-export function Totals({ result, system }: { result: SolveResult; system: UnitSystem }) {
+export const Totals = memo(function Totals({ result, system }: { result: SolveResult; system: UnitSystem }) {
   const t = result.totals;
   return (
     <View style={styles.figures} testID="results-totals">
@@ -42,7 +42,7 @@ export function Totals({ result, system }: { result: SolveResult; system: UnitSy
       <Figure label="Circuits" value={String(t.circuitCount)} />
     </View>
   );
-}
+});
 
 const COLS: { key: string; title: string; kind?: QuantityKind; width: number }[] = [
   { key: 'index', title: '#', width: 28 },
@@ -124,7 +124,7 @@ function CircuitCards({ circuits, system, onSelect }: { circuits: CircuitResult[
   );
 }
 
-export function CircuitTable({ circuits, system, onSelect }: { circuits: CircuitResult[]; system: UnitSystem; onSelect: (index: number) => void }) {
+export const CircuitTable = memo(function CircuitTable({ circuits, system, onSelect }: { circuits: CircuitResult[]; system: UnitSystem; onSelect: (index: number) => void }) {
   const { isWide } = useBreakpoint();
   if (!isWide) return <CircuitCards circuits={circuits} system={system} onSelect={onSelect} />;
   const textCols = new Set(['arrangement', 'regime']);
@@ -170,7 +170,7 @@ export function CircuitTable({ circuits, system, onSelect }: { circuits: Circuit
       </ScrollView>
     </View>
   );
-}
+});
 
 const severityTone = { critical: colors.danger, warning: colors.warning, info: colors.primary } as const;
 
@@ -236,8 +236,14 @@ export function ResultsPanel({
         <Banner tone="error" title="The circuiting is not complete">{`${topology.errors.length} problem${topology.errors.length === 1 ? '' : 's'} on the sheet; fix them to see performance.`}</Banner>
       ) : null}
       {live.error && !invalid ? <Banner tone="error" title="The solve failed">{live.error}</Banner> : null}
-      {!invalid && result && result.valid ? (
-        <View style={[styles.stack, !fresh && styles.stale]} testID={fresh ? 'results-fresh' : 'results-stale'} {...({ dataSet: { solveVersion: String(live.resultVersion) } } as object)}>
+      {result && result.valid ? (
+        // Kept mounted but hidden while the drawing is invalid (never old numbers on screen), so mending the
+        // drawing does not rebuild the whole table.
+        <View
+          style={[styles.stack, !fresh && styles.stale, invalid && styles.hidden]}
+          testID={invalid ? undefined : fresh ? 'results-fresh' : 'results-stale'}
+          {...({ dataSet: { solveVersion: String(live.resultVersion) } } as object)}
+        >
           {!fresh ? (
             <Text style={[type.smallStrong, styles.staleTag]} testID="results-stale-tag">
               Updating: these figures are for the previous drawing
@@ -255,9 +261,8 @@ export function ResultsPanel({
             </Section>
           ) : null}
         </View>
-      ) : !invalid ? (
-        <Text style={[type.small, { color: colors.textMuted }]}>Solving…</Text>
       ) : null}
+      {!invalid && !(result && result.valid) ? <Text style={[type.small, { color: colors.textMuted }]}>Solving…</Text> : null}
       <Section title={invalid ? 'Problems' : 'Warnings'}>
         <IssueList errors={topology.errors} warnings={warnings} onSelect={onSelectIssue} />
       </Section>
@@ -269,6 +274,7 @@ const styles = StyleSheet.create({
   panel: { gap: space.lg },
   stack: { gap: space.lg },
   stale: { opacity: 0.55 },
+  hidden: { display: 'none' },
   staleTag: { color: colors.warning },
   section: { gap: space.sm },
   sectionTitle: { color: colors.textMuted, textTransform: 'uppercase', letterSpacing: 0.6 },

@@ -3,6 +3,7 @@
  * Two y axes: capacity on the left, Reynolds number on the right with the laminar (2300) and turbulent (4000)
  * bounds of ENGINEERING.md v1 decision 6 drawn as dashed lines.
  */
+import { memo } from 'react';
 import Svg, { Circle, G, Line, Path, Text as SvgText } from 'react-native-svg';
 import { View } from 'react-native';
 import { colors, fonts } from '@/components/ui/theme';
@@ -13,7 +14,7 @@ const W = 340;
 const H = 200;
 const PAD = { l: 52, r: 52, t: 30, b: 36 };
 
-export function TurndownChart({ points, system }: { points: TurndownPoint[]; system: UnitSystem }) {
+export const TurndownChart = memo(function TurndownChart({ points, system }: { points: TurndownPoint[]; system: UnitSystem }) {
   const pts = points.filter((p) => p.capacity_W !== undefined).sort((a, b) => a.flowFraction - b.flowFraction);
   if (pts.length < 2) return null;
   const cap = pts.map((p) => formatQuantity('power', p.capacity_W!, system).value);
@@ -71,4 +72,4 @@ export function TurndownChart({ points, system }: { points: TurndownPoint[]; sys
       </Svg>
     </View>
   );
-}
+});

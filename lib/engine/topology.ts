@@ -6,7 +6,7 @@
  * a document that passed the zod schema: out-of-range references are reported, loops are bounded by the tube count.
  */
 import { areNeighbours, bendRadius_m, halfPitchLevel } from '@/lib/engine/geometry';
-import { crossingPairs, type BendFrame } from '@/lib/engine/topology-crossings';
+import { crossingPairs, segmentsIntersectXY, type BendFrame } from '@/lib/engine/topology-crossings';
 import type {
   Arrangement,
   CoilDocument,
@@ -133,22 +133,10 @@ export function trappedLowPoints(tubes: readonly TubeRef[]): TubeRef[] {
 }
 
 interface Point { x: number; y: number }
-const cross = (o: Point, a: Point, b: Point) => (a.x - o.x) * (b.y - o.y) - (a.y - o.y) * (b.x - o.x);
-const onSegment = (p: Point, q: Point, r: Point) =>
-  Math.min(p.x, r.x) <= q.x && q.x <= Math.max(p.x, r.x) && Math.min(p.y, r.y) <= q.y && q.y <= Math.max(p.y, r.y);
 
 /** True when segments p1p2 and p3p4 intersect (touching or overlapping counts). Integer-valued inputs keep it exact. */
 export function segmentsIntersect(p1: Point, p2: Point, p3: Point, p4: Point): boolean {
-  const d1 = Math.sign(cross(p3, p4, p1));
-  const d2 = Math.sign(cross(p3, p4, p2));
-  const d3 = Math.sign(cross(p1, p2, p3));
-  const d4 = Math.sign(cross(p1, p2, p4));
-  if (d1 * d2 < 0 && d3 * d4 < 0) return true;
-  if (d1 === 0 && onSegment(p3, p1, p4)) return true;
-  if (d2 === 0 && onSegment(p3, p2, p4)) return true;
-  if (d3 === 0 && onSegment(p1, p3, p2)) return true;
-  if (d4 === 0 && onSegment(p1, p4, p2)) return true;
-  return false;
+  return segmentsIntersectXY(p1.x, p1.y, p2.x, p2.y, p3.x, p3.y, p4.x, p4.y);
 }
 
 const sameTube = (a: TubeRef, b: TubeRef) => a.row === b.row && a.tube === b.tube;
