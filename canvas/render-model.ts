@@ -155,6 +155,7 @@ function faceIsFaint(face: FaceShown, end: EndFace): boolean | null {
 export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analysis: SheetAnalysis, options: DrawingOptions): SheetDrawing {
   const place = new Map<string, { circuit: number; pass: number }>();
   for (const c of analysis.circuits) c.tubes.forEach((t, i) => place.set(tubeKey(t), { circuit: c.index, pass: i + 1 }));
+  const colourOf = circuitColours(layout, circuiting, analysis);
   const errors = new Set(analysis.errorTubes.map(tubeKey));
   const warnings = new Set(analysis.warningTubes.map(tubeKey));
   const sel = options.selection;
@@ -200,7 +201,7 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
         labelColour = t < 0.55 ? '#FFFFFF' : '#0E2A33';
       }
     } else if (p) {
-      fill = circuitColour(p.circuit - 1);
+      fill = colourOf(p.circuit);
     }
     const showLabel = p !== undefined && (showAllLabels || selectedCircuit === p.circuit);
     return {
@@ -242,7 +243,7 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
       a: b.a,
       b: b.b,
       d,
-      colour: invalid ? sheetColours.error : sameCircuit ? circuitColour(ka!.circuit - 1) : '#4A5A60',
+      colour: invalid ? sheetColours.error : sameCircuit ? colourOf(ka!.circuit) : '#4A5A60',
       faint,
       invalid,
       arrow: sameCircuit ? arrowHead(from, to, r, crossover) : null,
@@ -260,11 +261,35 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
       const spot = spotOf(layout, s.tube);
       if (!spot) continue;
       const p = place.get(spot.key);
-      stubs.push({ key: `${kind}:${s.end}:${spot.key}`, kind, end: s.end, ...stubPath(spot, kind, r), colour: p ? circuitColour(p.circuit - 1) : '#4A5A60', faint });
+      stubs.push({ key: `${kind}:${s.end}:${spot.key}`, kind, end: s.end, ...stubPath(spot, kind, r), colour: p ? colourOf(p.circuit) : '#4A5A60', faint });
     }
   }
 
   return { tubes, bends, stubs, place, temperatureRange: range };
+}
+
+/**
+ * Colour of each circuit, by the rank of its supply stub among all supply stubs (top of the sheet first, then row
+ * order: the order the tracer numbers circuits in). On a complete drawing the rank is the circuit's number less
+ * one; while one circuit is broken the others keep their colours instead of shifting up a number, which keeps the
+ * sheet steady and spares re-drawing every tube after the break.
+ */
+function circuitColours(layout: SheetLayout, circuiting: Circuiting, analysis: SheetAnalysis): (circuit: number) => string {
+  const ranked = circuiting.supply
+    .map((s) => spotOf(layout, s.tube))
+    .filter((s): s is TubeSpot => s !== undefined)
+    .sort((u, v) => u.y - v.y || u.row - v.row);
+  const rank = new Map<string, number>();
+  ranked.forEach((s, i) => {
+    if (!rank.has(s.key)) rank.set(s.key, i);
+  });
+  const slot = new Map<number, number>();
+  for (const c of analysis.circuits) {
+    const first = c.tubes[0];
+    const r = first ? rank.get(tubeKey(first)) : undefined;
+    slot.set(c.index, r ?? c.index - 1);
+  }
+  return (circuit) => circuitColour(slot.get(circuit) ?? circuit - 1);
 }
 
 const bendKey = (end: EndFace, a: string, b: string) => `${end}:${a}:${b}`;

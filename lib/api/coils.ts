@@ -20,6 +20,11 @@ export const coilListItemSchema = z.object({
   valid: z.boolean().nullable().optional(),
   revision: z.number().int(),
   updatedAt: z.string(),
+  /** The newest review decision on any version of the coil (approved / changes requested), or null. */
+  latestDecision: z
+    .object({ status: z.enum(['approved', 'changes-requested']), versionNumber: z.number().int(), createdAt: z.string() })
+    .nullable()
+    .optional(),
 });
 export type CoilListItem = z.infer<typeof coilListItemSchema>;
 

@@ -1,6 +1,7 @@
 /** Coils of a project: read by every member; created, saved, renamed, copied and deleted by owners and designers. */
 import { deleteCoil, findCoilTeam, insertCoil, listCoils, renameCoil, saveCoilDraft } from '@/db/queries/coils';
 import { touchProject } from '@/db/queries/projects';
+import { latestDecisionPerCoil } from '@/db/queries/versions';
 import type { CoilRow } from '@/db/schema';
 import type { CoilDocument } from '@/lib/engine/types';
 import { notFound } from '@/server/errors';
@@ -31,6 +32,7 @@ export function coilService(deps: ServiceDeps) {
     async list(userId: string, projectId: string) {
       await projectAccess(db, projectId, userId, 'read');
       const rows = await listCoils(db, projectId);
+      const decisions = new Map((await latestDecisionPerCoil(db, rows.map((r) => r.id))).map((d) => [d.coilId, d]));
       return rows.map((r) => ({
         id: r.id,
         name: r.name,
@@ -43,6 +45,10 @@ export function coilService(deps: ServiceDeps) {
         valid: r.summary?.valid ?? null,
         revision: r.revision,
         updatedAt: r.updatedAt,
+        latestDecision: (() => {
+          const d = decisions.get(r.id);
+          return d ? { status: d.status, versionNumber: d.versionNumber, createdAt: d.createdAt } : null;
+        })(),
       }));
     },
 

@@ -249,6 +249,19 @@ describe('coil versions', () => {
       expect(await latestDecisionPerCoil(server.database.db, [])).toEqual([]);
     });
 
+    it('shows each coil\'s newest decision in the project\'s coil list', async () => {
+      const decided = await newCoil(team, 'Listed decided');
+      const v1 = await newVersion(team, decided.id, 'one');
+      await team.agents.reviewer.post(`/api/versions/${v1}/decisions`).send({ status: 'approved' }).expect(201);
+      const coil = (await team.agents.viewer.get(`/api/coils/${decided.id}`).expect(200)).body.coil;
+      const list = (await team.agents.viewer.get(`/api/projects/${coil.projectId}/coils`).expect(200)).body.coils as {
+        id: string;
+        latestDecision: { status: string; versionNumber: number } | null;
+      }[];
+      expect(list.find((c) => c.id === decided.id)!.latestDecision).toMatchObject({ status: 'approved', versionNumber: 1 });
+      expect(list.filter((c) => c.id !== decided.id).every((c) => c.latestDecision === null || typeof c.latestDecision.status === 'string')).toBe(true);
+    });
+
     it('rejects a malformed decision with 400 naming the field', async () => {
       const coil = await newCoil(team, 'Bad decision');
       const versionId = await newVersion(team, coil.id);
