@@ -11,6 +11,7 @@ import { buildDrawing, buildSheetLayout, hitBend, spotOf, tubeKey } from '@/canv
 import { serpentineCircuiting } from '@/lib/engine/generators';
 import { traceCircuits } from '@/lib/engine/topology';
 import type { CoilDocument } from '@/lib/engine/types';
+import { circuitColour } from '@/canvas/palette';
 import { smallCoil } from './fixture';
 
 const t = (row: number, tube: number) => ({ row, tube });
@@ -99,5 +100,32 @@ describe('hitBend', () => {
     expect(hitBend(layout, doc.circuiting, 'connection', (p.x + q.x) / 2, (p.y + q.y) / 2)).toBeNull();
     const far = spotOf(layout, t(2, 4))!;
     expect(hitBend(layout, doc.circuiting, 'opposite', far.x, far.y)).toBeNull();
+  });
+});
+
+describe('circuit colours while a circuit is broken', () => {
+  // Not an engineering check: the editor's colouring rule (circuits keep their colour while another is broken).
+  it('match the circuit numbers on a complete drawing and stay put when one circuit breaks', () => {
+    const doc = smallCoil(4, 12);
+    doc.circuiting = serpentineCircuiting(doc.geometry, 12);
+    const layout = buildSheetLayout(doc.geometry);
+    const draw = (d: CoilDocument) => buildDrawing(layout, d.circuiting, sheetAnalysis(traceCircuits(d), null), { face: 'opposite', selection: null });
+    const before = draw(doc);
+    const topology = traceCircuits(doc);
+    expect(topology.valid).toBe(true);
+    for (const c of topology.circuits) {
+      for (const tube of c.tubes) expect(before.tubes.find((x) => x.key === tubeKey(tube))!.fill).toBe(circuitColour(c.index - 1));
+    }
+    const first = topology.circuits[0];
+    const broken = produce(doc, (d: CoilDocument) => {
+      d.circuiting.bends = d.circuiting.bends.filter((b) => !(b.end === 'opposite' && b.a.row === first.tubes[0].row && b.a.tube === first.tubes[0].tube) && !(b.end === 'opposite' && b.b.row === first.tubes[0].row && b.b.tube === first.tubes[0].tube));
+    });
+    expect(traceCircuits(broken).circuits.length).toBe(topology.circuits.length - 1);
+    const after = draw(broken);
+    const firstKeys = new Set(first.tubes.map(tubeKey));
+    for (const look of after.tubes) {
+      if (firstKeys.has(look.key)) continue;
+      expect(look.fill).toBe(before.tubes.find((x) => x.key === look.key)!.fill);
+    }
   });
 });
