@@ -1,8 +1,11 @@
 /**
  * Undo history entries (ARCHITECTURE.md section 4): immer patches and inverse patches of one user step, plus the
- * selection before and after it, so undo puts the user back where the step started.
+ * selection before and after it, so undo puts the user back where the step started. Each entry also keeps the
+ * document before and after the step: immer shares every unchanged part between them, so they cost little, and
+ * undo/redo swap them in at once instead of replaying patches (which copies whole bend lists on a large sheet).
  */
 import type { Patch } from 'immer';
+import type { CoilDocument } from '@/lib/engine/types';
 import type { Selection } from './session';
 
 export interface HistoryEntry {
@@ -11,6 +14,8 @@ export interface HistoryEntry {
   inversePatches: Patch[];
   selectionBefore: Selection;
   selectionAfter: Selection;
+  documentBefore: CoilDocument;
+  documentAfter: CoilDocument;
 }
 
 /** Longest undo history kept; older steps fall off the start. */
@@ -22,4 +27,5 @@ export interface OpenGesture {
   patches: Patch[];
   inversePatches: Patch[];
   selectionBefore: Selection;
+  documentBefore: CoilDocument;
 }

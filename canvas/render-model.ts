@@ -235,7 +235,8 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
     const invalid = !sameCircuit && (errors.has(pa.key) || errors.has(pb.key));
     const [from, to] = sameCircuit && ka!.pass > kb!.pass ? [pb, pa] : [pa, pb];
     const crossover = b.crossover === true;
-    const d = bendPath(from, to, crossover, r);
+    const shape = bendShape(layout, from, to, crossover);
+    const d = shape.d;
     const key = bendKey(b.end, pa.key, pb.key);
     bends.push({
       key,
@@ -246,9 +247,9 @@ export function buildDrawing(layout: SheetLayout, circuiting: Circuiting, analys
       colour: invalid ? sheetColours.error : sameCircuit ? colourOf(ka!.circuit) : '#4A5A60',
       faint,
       invalid,
-      arrow: sameCircuit ? arrowHead(from, to, r, crossover) : null,
+      arrow: sameCircuit ? shape.arrow : null,
       crossover,
-      bridge: crossover ? bridgeMark(from, to, r) : null,
+      bridge: shape.bridge,
       selected: selectedBend !== null && (selectedBend === key || selectedBend === bendKey(b.end, pb.key, pa.key)),
     });
   }
@@ -290,6 +291,30 @@ function circuitColours(layout: SheetLayout, circuiting: Circuiting, analysis: S
     slot.set(c.index, r ?? c.index - 1);
   }
   return (circuit) => circuitColour(slot.get(circuit) ?? circuit - 1);
+}
+
+interface BendShape { d: string; arrow: string; bridge: string | null }
+
+/**
+ * Path strings of a bend from one tube to another, kept per layout: they depend only on the two positions, and
+ * formatting them anew for every bend on every edit was the largest cost of building the drawing.
+ */
+const shapeCache = new WeakMap<SheetLayout, Map<string, BendShape>>();
+
+function bendShape(layout: SheetLayout, from: TubeSpot, to: TubeSpot, crossover: boolean): BendShape {
+  let cache = shapeCache.get(layout);
+  if (!cache) {
+    cache = new Map();
+    shapeCache.set(layout, cache);
+  }
+  const key = `${from.key}>${to.key}${crossover ? 'x' : ''}`;
+  let shape = cache.get(key);
+  if (!shape) {
+    const r = layout.tubeRadius;
+    shape = { d: bendPath(from, to, crossover, r), arrow: arrowHead(from, to, r, crossover), bridge: crossover ? bridgeMark(from, to, r) : null };
+    cache.set(key, shape);
+  }
+  return shape;
 }
 
 const bendKey = (end: EndFace, a: string, b: string) => `${end}:${a}:${b}`;

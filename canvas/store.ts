@@ -51,9 +51,13 @@ export function createEditorStore(initial: CoilDocument): EditorStore {
   return createStore<EditorState>()((set, get) => {
     const applyStep = (entry: HistoryEntry, direction: 'undo' | 'redo') => {
       const s = get();
+      // Every change of the document is in the history, so the entry's snapshot is exactly what the patches
+      // would rebuild; the patches are replayed only if that ever stops holding.
+      const expected = direction === 'undo' ? entry.documentAfter : entry.documentBefore;
+      const target = direction === 'undo' ? entry.documentBefore : entry.documentAfter;
       const patches: Patch[] = direction === 'undo' ? entry.inversePatches : entry.patches;
       set({
-        document: applyPatches(s.document, patches),
+        document: s.document === expected ? target : applyPatches(s.document, patches),
         documentVersion: s.documentVersion + 1,
         session: {
           ...s.session,
@@ -113,6 +117,8 @@ export function createEditorStore(initial: CoilDocument): EditorStore {
           inversePatches,
           selectionBefore: s.session.selection,
           selectionAfter,
+          documentBefore: s.document,
+          documentAfter: next,
         };
         set({
           document: next,
@@ -127,7 +133,7 @@ export function createEditorStore(initial: CoilDocument): EditorStore {
       beginGesture(label) {
         const s = get();
         if (s.gesture) s.endGesture();
-        set({ gesture: { label, patches: [], inversePatches: [], selectionBefore: get().session.selection } });
+        set({ gesture: { label, patches: [], inversePatches: [], selectionBefore: get().session.selection, documentBefore: get().document } });
       },
 
       endGesture() {
@@ -144,6 +150,8 @@ export function createEditorStore(initial: CoilDocument): EditorStore {
           inversePatches: g.inversePatches,
           selectionBefore: g.selectionBefore,
           selectionAfter: s.session.selection,
+          documentBefore: g.documentBefore,
+          documentAfter: s.document,
         };
         set({ gesture: null, past: [...s.past, entry].slice(-HISTORY_LIMIT), future: [] });
       },
@@ -158,7 +166,7 @@ export function createEditorStore(initial: CoilDocument): EditorStore {
         }
         set({
           gesture: null,
-          document: applyPatches(s.document, g.inversePatches),
+          document: g.documentBefore,
           documentVersion: s.documentVersion + 1,
           session: { ...s.session, selection: g.selectionBefore, pendingTube: null },
         });

@@ -1,7 +1,8 @@
 /**
- * The coil workspace at phone (390x844) and wide (1440x900): create a coil from a starting point, draw a 2-row,
- * 4-tube coil's two circuits bend by bend, break a bend and see the error on the sheet, undo and redo, generate a
- * standard circuiting for a 4-row, 24-tube coil, switch units, reload and find the draft intact.
+ * The coil workspace at phone (390x844) and wide (1440x900): create a coil from a starting point, see every tool on
+ * screen, draw a 2-row, 4-tube coil's two circuits bend by bend, read a tube's circuit and water temperatures, mark
+ * and unmark crossovers, break a bend and see the error on the sheet (and from the problem list), undo and redo,
+ * generate a standard circuiting for a 4-row, 24-tube coil, switch units, reload and find the draft intact.
  */
 import { expect, test, type Page, type TestInfo } from '@playwright/test';
 import { expectNoSidewaysScroll, PASSWORD, signUpInUi, uniqueEmail } from './helpers';

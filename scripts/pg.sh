@@ -43,7 +43,16 @@ init() {
   [ -f "$PGDATA/PG_VERSION" ] && return 0
   mkdir -p "$PGHOME"
   chmod 700 "$PGHOME"
-  [ "$(id -u)" = 0 ] && chown "$PGOSUSER" "$PGHOME"
+  if [ "$(id -u)" = 0 ]; then
+    chown "$PGOSUSER" "$PGHOME"
+    # The server runs as $PGOSUSER, which must be able to pass through every parent folder (a checkout under a
+    # mode-700 temporary folder is not). Grant traverse-only permission (o+x: no listing) where it is missing.
+    local d; d="$(dirname "$PGHOME")"
+    while [ "$d" != / ]; do
+      if ! as_pg test -x "$d"; then chmod o+x "$d" && echo "granted traverse permission (o+x) on $d for the database server"; fi
+      d="$(dirname "$d")"
+    done
+  fi
   if ! as_pg test -w "$PGHOME"; then
     echo "user $PGOSUSER cannot write $PGHOME (a parent folder is not traversable?); set PGHOME" >&2; exit 1
   fi

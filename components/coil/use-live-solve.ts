@@ -10,9 +10,25 @@ import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { solve } from '@/lib/api/solve';
 import { coilDocumentSchema } from '@/lib/schema/coil-document';
 import { traceCircuits, type Topology } from '@/lib/engine/topology';
-import type { CoilDocument, SolveResult } from '@/lib/engine/types';
+import type { Circuiting, CoilDocument, SolveResult, TubeRef } from '@/lib/engine/types';
 
 export const LIVE_SOLVE_DELAY_MS = 150;
+
+/** Tube references off the grid, worded as the schema words them (lib/schema/coil-document.ts). */
+export function tubeReferenceIssues(c: Circuiting, rows: number, tubesPerRow: number): LiveSolve['documentIssues'] {
+  const out: LiveSolve['documentIssues'] = [];
+  const check = (t: TubeRef, path: string) => {
+    if (!Number.isInteger(t.row) || t.row < 1 || t.row > rows) out.push({ path: `${path}.row`, message: `row ${t.row} is outside the coil (it has ${rows} rows)` });
+    if (!Number.isInteger(t.tube) || t.tube < 1 || t.tube > tubesPerRow) out.push({ path: `${path}.tube`, message: `tube ${t.tube} is outside the coil (it has ${tubesPerRow} tubes per row)` });
+  };
+  c.bends.forEach((b, i) => {
+    check(b.a, `circuiting.bends.${i}.a`);
+    check(b.b, `circuiting.bends.${i}.b`);
+  });
+  c.supply.forEach((x, i) => check(x.tube, `circuiting.supply.${i}.tube`));
+  c.return.forEach((x, i) => check(x.tube, `circuiting.return.${i}.tube`));
+  return out.length === 0 ? NO_ISSUES : out;
+}
 
 /** One shared empty list, so that what depends on the issues does not change when a valid drawing is edited. */
 const NO_ISSUES: LiveSolve['documentIssues'] = [];
@@ -33,10 +49,19 @@ export interface LiveSolve {
 
 export function useLiveSolve(coilId: string, document: CoilDocument, version: number): LiveSolve {
   const topology = useMemo(() => traceCircuits(document), [document]);
-  const issues = useMemo(() => {
-    const parsed = coilDocumentSchema.safeParse(document);
+  // The schema check of the whole document walks every bend; an edit of the drawing re-checks only what it can
+  // break (tube references on the grid: the commands build well-formed bends and stubs), the rest when it changes.
+  const { schemaVersion, name, geometry, conditions, options, circuiting } = document;
+  const shellIssues = useMemo(() => {
+    const shell = { schemaVersion, name, geometry, conditions, options, circuiting: { bends: [], supply: [], return: [] } };
+    const parsed = coilDocumentSchema.safeParse(shell);
     return parsed.success ? NO_ISSUES : parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
-  }, [document]);
+  }, [schemaVersion, name, geometry, conditions, options]);
+  const drawingIssues = useMemo(() => tubeReferenceIssues(circuiting, geometry.rows, geometry.tubesPerRow), [circuiting, geometry.rows, geometry.tubesPerRow]);
+  const issues = useMemo(
+    () => (shellIssues.length === 0 && drawingIssues.length === 0 ? NO_ISSUES : [...shellIssues, ...drawingIssues]),
+    [shellIssues, drawingIssues],
+  );
   const solvable = topology.valid && issues.length === 0;
 
   const [request, setRequest] = useState({ document, version, solvable });
