@@ -1,14 +1,15 @@
 /**
  * npm run bench [-- --only engine]
  *
- * Median wall-clock times of the engine (and, later, the editor) measured with performance.now(): each case is
+ * Median wall-clock times of the engine measured with performance.now(): each case is
  * run a few times to warm up, then N times; the median and the fastest run are printed. Targets (issue text):
  * topology + hydraulics of a 12-row x 60-high coil with 40 unequal circuits < 5 ms; full thermal solve of an
  * 8-row x 40-high wet chilled-water coil at 6 segments < 50 ms; also 12 x 60, and the growth with segments.
  *
- * The editor's UI measurements belong in `uiBenchmarks()` below (left empty on purpose: the editor engineer adds
- * them); `--only engine` skips that section.
+ * The editor's measurements run in scripts/bench-ui.ts (headless Chromium against the built app); `--only engine`
+ * skips them.
  */
+import { spawnSync } from 'node:child_process';
 import { traceCircuits } from '@/lib/engine/topology';
 import { areNeighbours, deriveGeometry } from '@/lib/engine/geometry';
 import { serpentineCircuiting } from '@/lib/engine/generators';
@@ -169,10 +170,6 @@ export function engineBenchmarks(): Timing[] {
   return out;
 }
 
-/** Editor / UI measurements: the editor engineer adds theirs here (kept separate so `--only engine` skips it). */
-export function uiBenchmarks(): Timing[] {
-  return [];
-}
 
 function report(title: string, timings: Timing[]): void {
   process.stdout.write(`\n${title}\n`);
@@ -197,8 +194,10 @@ function main(): void {
   const only = onlyIndex >= 0 ? args[onlyIndex + 1] : undefined;
   report('engine', engineBenchmarks());
   if (only !== 'engine') {
-    const ui = uiBenchmarks();
-    if (ui.length > 0) report('editor', ui);
+    // The editor measurements drive the built web app in Chromium (scripts/bench-ui.ts); their own process.
+    process.stdout.write('\neditor (scripts/bench-ui.ts)\n');
+    const ui = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/bench-ui.ts'], { stdio: 'inherit' });
+    if (ui.status !== 0) process.exitCode = ui.status ?? 1;
   }
 }
 

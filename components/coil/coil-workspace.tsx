@@ -27,6 +27,8 @@ import { GeometryForm } from './geometry-form';
 import { ResultsPanel } from './results-panel';
 import { SaveStatus } from './save-status';
 import { useAutosave } from './use-autosave';
+import { SaveVersionButton } from '@/components/versions/save-version-button';
+import { VersionLink } from '@/components/versions/version-link';
 import { useLiveSolve } from './use-live-solve';
 
 export interface CoilWorkspaceProps {
@@ -144,6 +146,9 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
           testID="unit-switch"
         />
         <Button size="sm" variant="secondary" label="Standard circuiting" onPress={() => setGeneratorOpen(true)} testID="open-generator" />
+        <VersionLink projectId={coil.projectId} coilId={coil.id} />
+        {/* A version is cut from the server's draft: wait until every edit is saved. */}
+        <SaveVersionButton coilId={coil.id} disabled={autosave.state !== 'saved'} />
       </View>
     </View>
   );

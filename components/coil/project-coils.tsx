@@ -18,6 +18,7 @@ import { canEditProjects, useCurrentTeam } from '@/components/shell/use-current-
 import { coilKeys, createCoil, deleteCoil, duplicateCoil, listCoils, renameCoil, type CoilListItem } from '@/lib/api/coils';
 import type { CoilDocument } from '@/lib/engine/types';
 import { formatQuantity, type UnitSystem } from '@/lib/units';
+import { ImportCoilButton } from '@/components/exports/import-coil-button';
 import { NewCoilSheet } from './new-coil-sheet';
 
 function coilFigures(c: CoilListItem, system: UnitSystem): string[] {
@@ -68,6 +69,7 @@ export function ProjectCoils({ projectId }: { projectId: string }) {
 
   return (
     <Card title="Coils" actions={canEdit ? <Button size="sm" label="New coil" onPress={() => setCreating(true)} testID="new-coil" /> : undefined} testID={`project-coils-${projectId}`}>
+      {canEdit ? <ImportCoilButton projectId={projectId} onImported={(c) => router.push(`/projects/${projectId}/coils/${c.id}`)} /> : null}
       {coils.isPending ? <ActivityIndicator color={colors.primary} /> : null}
       {coils.isError ? <Banner tone="error">{coils.error.message}</Banner> : null}
       {coils.data && coils.data.length === 0 ? (
@@ -88,6 +90,14 @@ export function ProjectCoils({ projectId }: { projectId: string }) {
                   </Text>
                 ))}
                 {c.valid === false ? <Text style={[type.smallStrong, { color: colors.danger }]}>circuiting incomplete</Text> : null}
+                {c.latestDecision ? (
+                  <Text
+                    style={[type.smallStrong, { color: c.latestDecision.status === 'approved' ? colors.success : colors.warning }]}
+                    testID="coil-latest-decision"
+                  >
+                    {c.latestDecision.status === 'approved' ? 'approved' : 'changes requested'} (version {c.latestDecision.versionNumber})
+                  </Text>
+                ) : null}
               </View>
             </Pressable>
             {canEdit ? (

@@ -1,13 +1,17 @@
 /**
  * Autosave of the working draft: every change is sent to the server (debounced PUT with the revision it started
  * from), so closing the tab loses nothing. States: saved, pending (a change waits), saving, offline (retrying),
- * conflict (409 stale_revision: someone else saved; the user reloads the server's draft or keeps theirs),
+ * conflict (409 stale_revision: someone else saved; the user loads their draft, keeps this drawing as a new version,
+ * or keeps both as versions and compares them: nothing is ever written over the other person's draft),
  * invalid (the document fails validation; nothing is sent until it is fixed), error.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { Platform } from 'react-native';
+import { useQueryClient } from '@tanstack/react-query';
+import { useRouter } from 'expo-router';
 import { ApiError } from '@/lib/api/client';
 import { getCoil, saveDraft } from '@/lib/api/coils';
+import { saveVersion, versionKeys } from '@/lib/api/versions';
 import { coilDocumentSchema } from '@/lib/schema/coil-document';
 import type { CoilDocument } from '@/lib/engine/types';
 import type { EditorStore } from '@/canvas/store';
@@ -24,8 +28,15 @@ export interface Autosave {
   revision: number;
   /** Throw away local changes and load the server's draft. */
   reloadServerDraft: () => Promise<void>;
-  /** Keep the local drawing: save it over the server's newer draft. */
-  keepMine: () => Promise<void>;
+  /** Keep the local drawing as a new version, then load their draft. */
+  keepMineAsVersion: () => Promise<void>;
+  /** Keep the local drawing and their draft as two versions, load their draft and open the comparison. */
+  compareWithTheirs: () => Promise<void>;
+  /** True while a conflict action talks to the server. */
+  resolving: boolean;
+  /** The version the local drawing was kept as, shown until dismissed. */
+  kept: { versionId: string; number: number } | null;
+  dismissKept: () => void;
   /** Send now (e.g. before leaving). */
   flush: () => void;
 }
@@ -34,6 +45,10 @@ export function useAutosave(coilId: string, store: EditorStore, initialRevision:
   const [state, setState] = useState<SaveState>('saved');
   const [message, setMessage] = useState<string | null>(null);
   const [revision, setRevision] = useState(initialRevision);
+  const [resolving, setResolving] = useState(false);
+  const [kept, setKept] = useState<Autosave['kept']>(null);
+  const queryClient = useQueryClient();
+  const router = useRouter();
   const revisionRef = useRef(initialRevision);
   const savedDoc = useRef<CoilDocument>(store.getState().document);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
@@ -137,14 +152,55 @@ export function useAutosave(coilId: string, store: EditorStore, initialRevision:
     update('saved');
   }, [coilId, store, update]);
 
-  const keepMine = useCallback(async () => {
-    const coil = await getCoil(coilId);
-    revisionRef.current = coil.revision;
-    blocked.current = false;
-    await save();
-  }, [coilId, save]);
+  /** Saves the drawing the conflict left unsent as a version of its own (the server draft is not touched). */
+  const keepLocalAsVersion = useCallback(async () => {
+    // revisionRef still holds the revision this drawing was based on: the one the server refused as stale.
+    const message = `Kept from a conflicting edit (draft revision ${revisionRef.current})`;
+    return saveVersion(coilId, message, store.getState().document);
+  }, [coilId, store]);
+
+  /** Runs a conflict action; on failure the conflict stays open with the reason, so nothing is lost. */
+  const resolve = useCallback(
+    async (action: () => Promise<void>) => {
+      if (resolving) return;
+      setResolving(true);
+      try {
+        await action();
+        void queryClient.invalidateQueries({ queryKey: versionKeys.list(coilId) });
+      } catch (e) {
+        update('conflict', `${e instanceof Error ? e.message : 'That did not work.'} Your drawing is still here; try again.`);
+      } finally {
+        if (mounted.current) setResolving(false);
+      }
+    },
+    [coilId, queryClient, resolving, update],
+  );
+
+  const keepMineAsVersion = useCallback(
+    () =>
+      resolve(async () => {
+        const mine = await keepLocalAsVersion();
+        await reloadServerDraft();
+        setKept({ versionId: mine.id, number: mine.number });
+      }),
+    [resolve, keepLocalAsVersion, reloadServerDraft],
+  );
+
+  const compareWithTheirs = useCallback(
+    () =>
+      resolve(async () => {
+        const mine = await keepLocalAsVersion();
+        const theirs = await saveVersion(coilId, 'Draft at the time of a conflicting edit');
+        await reloadServerDraft();
+        setKept({ versionId: mine.id, number: mine.number });
+        router.push(`/compare/${encodeURIComponent(mine.id)}/${encodeURIComponent(theirs.id)}`);
+      }),
+    [coilId, resolve, keepLocalAsVersion, reloadServerDraft, router],
+  );
+
+  const dismissKept = useCallback(() => setKept(null), []);
 
   const flush = useCallback(() => void save(), [save]);
 
-  return { state, message, revision, reloadServerDraft, keepMine, flush };
+  return { state, message, revision, reloadServerDraft, keepMineAsVersion, compareWithTheirs, resolving, kept, dismissKept, flush };
 }

@@ -3,6 +3,7 @@
  * (DEVELOPERS.md, HTTP API). Every reply is parsed with its lib/schema/api-versions contract.
  */
 import { api } from '@/lib/api/client';
+import type { CoilDocument } from '@/lib/schema/coil-document';
 import {
   commentListReplySchema,
   commentReplySchema,
@@ -49,8 +50,10 @@ export async function listVersions(coilId: string): Promise<VersionListItem[]> {
   return (await api.get(`/api/coils/${id(coilId)}/versions`, versionListReplySchema)).versions;
 }
 
-export async function saveVersion(coilId: string, message: string): Promise<VersionListItem> {
-  return (await api.post(`/api/coils/${id(coilId)}/versions`, { message }, createdVersionReplySchema)).version;
+/** Saves the draft as a version, or, when `document` is given, that drawing instead (the draft is left as it is). */
+export async function saveVersion(coilId: string, message: string, document?: CoilDocument): Promise<VersionListItem> {
+  const body = document ? { message, document } : { message };
+  return (await api.post(`/api/coils/${id(coilId)}/versions`, body, createdVersionReplySchema)).version;
 }
 
 export async function getVersion(versionId: string): Promise<VersionDetail> {

@@ -17,6 +17,8 @@ export const createVersionBodySchema = z.object({
     .trim()
     .min(1, 'Describe what this version changes.')
     .max(500, 'Keep the message under 500 characters.'),
+  /** A drawing to keep as this version instead of the draft (a conflicting edit); the draft stays untouched. */
+  document: coilDocumentSchema.optional(),
 });
 export type CreateVersionBody = z.infer<typeof createVersionBodySchema>;
 

@@ -9,8 +9,8 @@ import type { ReviewServices } from '@/server/services/review-services';
 export function versionRoutes(services: ReviewServices, config: Config): Router {
   const r = Router();
   r.post('/coils/:coilId/versions', async (req, res) => {
-    const { message } = createVersionBodySchema.parse(req.body);
-    res.status(201).json({ version: await services.versions.create(signedIn(req).userId, param(req, 'coilId'), message) });
+    const { message, document } = createVersionBodySchema.parse(req.body);
+    res.status(201).json({ version: await services.versions.create(signedIn(req).userId, param(req, 'coilId'), message, document) });
   });
   r.get('/coils/:coilId/versions', async (req, res) => {
     res.json({ versions: await services.versions.list(signedIn(req).userId, param(req, 'coilId')) });

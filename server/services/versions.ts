@@ -16,6 +16,7 @@ import {
 } from '@/db/queries/versions';
 import { findUserById } from '@/db/queries/users';
 import type { CoilVersionRow } from '@/db/schema';
+import type { CoilDocument } from '@/lib/engine/types';
 import type { CompareReply, CreateDecisionBody, Decision, RestoreVersionReply, VersionDetail, VersionListItem } from '@/lib/schema/api-versions';
 import { notFound } from '@/server/errors';
 import { coilAccess, conflict } from '@/server/services/access';
@@ -71,21 +72,24 @@ export function versionService(deps: ServiceDeps, notifications: NotificationSer
   return {
     /**
      * Numbers are taken under a lock on the coil row, so concurrent saves queue and get 1, 2, 3... The solve runs
-     * before the lock on the draft as read then, and again inside only if the draft changed meanwhile.
+     * before the lock on the draft as read then, and again inside only if the draft changed meanwhile. With a
+     * `document` (a drawing kept from a conflicting edit) that document is stored instead and the draft is left
+     * as it is; the version still records the draft revision it was taken beside.
      */
-    async create(userId: string, coilId: string, message: string): Promise<VersionListItem> {
+    async create(userId: string, coilId: string, message: string, document?: CoilDocument): Promise<VersionListItem> {
       const { coil } = await coilAccess(db, coilId, userId, 'edit');
       let solvedRevision = coil.revision;
-      let summary = versionSummary(solve(coil.document));
+      let summary = versionSummary(solve(document ?? coil.document));
       const row = await db.transaction(async (tx) => {
         const draft = await lockCoilDraft(tx, coilId);
         if (!draft) throw notFound('The coil');
-        if (draft.revision !== solvedRevision) {
+        if (!document && draft.revision !== solvedRevision) {
           summary = versionSummary(solve(draft.document));
           solvedRevision = draft.revision;
         }
         const number = await nextVersionNumber(tx, coilId);
-        return insertVersion(tx, { coilId, number, message, document: draft.document, draftRevision: draft.revision, summary, authorId: userId });
+        const stored = document ?? draft.document;
+        return insertVersion(tx, { coilId, number, message, document: stored, draftRevision: draft.revision, summary, authorId: userId });
       });
       const author = await findUserById(db, userId);
       return presentVersion({ ...row, authorName: author?.name ?? null }, undefined);

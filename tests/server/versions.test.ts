@@ -137,6 +137,47 @@ describe('coil versions', () => {
     expect(anonymous.status).toBe(401);
   });
 
+  it('stores a given document as the version and leaves the draft and its revision untouched', async () => {
+    const coil = await newCoil(team, 'Kept drawing');
+    const theirs = { ...documentOf('Kept drawing'), name: 'Their edit' };
+    await team.agents.owner.put(`/api/coils/${coil.id}/draft`).send({ document: theirs, revision: 1 }).expect(200);
+    const mine = structuredClone(documentOf('Kept drawing'));
+    mine.name = 'My edit';
+    mine.circuiting.bends = mine.circuiting.bends.slice(1);
+    const res = await team.agents.designer
+      .post(`/api/coils/${coil.id}/versions`)
+      .send({ message: 'Kept from a conflicting edit (draft revision 1)', document: mine });
+    expect(res.status).toBe(201);
+    expect(res.body.version).toMatchObject({ number: 1, message: 'Kept from a conflicting edit (draft revision 1)', draftRevision: 2 });
+    // Reference: the engine's own solve of the kept document (lib/engine/solve-coil.ts), not of the draft.
+    const solved = solveCoil(mine);
+    expect(res.body.version.summary).toMatchObject({ valid: solved.valid, circuitCount: solved.totals.circuitCount, errorCount: solved.errors.length });
+    const stored = versionReplySchema.parse((await team.agents.viewer.get(`/api/versions/${res.body.version.id}`).expect(200)).body);
+    expect(stored.version.document).toEqual(mine);
+    const draft = (await team.agents.viewer.get(`/api/coils/${coil.id}`).expect(200)).body.coil;
+    expect(draft).toMatchObject({ revision: 2, document: theirs });
+    // Without a document the draft (theirs) is what is stored.
+    const plain = await team.agents.designer.post(`/api/coils/${coil.id}/versions`).send({ message: 'Draft at the time of a conflicting edit' }).expect(201);
+    const drafted = versionReplySchema.parse((await team.agents.viewer.get(`/api/versions/${plain.body.version.id}`).expect(200)).body);
+    expect(drafted.version.document).toEqual(theirs);
+    expect((await team.agents.viewer.get(`/api/coils/${coil.id}`)).body.coil.revision).toBe(2);
+  });
+
+  it('rejects a malformed kept document with 400 naming the field, and viewers and reviewers with 403', async () => {
+    const coil = await newCoil(team, 'Kept strictly');
+    for (const document of ['not a coil', { name: 'half a coil' }, { ...documentOf('Kept strictly'), geometry: null }]) {
+      const res = await team.agents.designer.post(`/api/coils/${coil.id}/versions`).send({ message: 'Kept', document });
+      expect(res.status, JSON.stringify(document)).toBe(400);
+      expect(Object.keys(res.body.error.fields).some((f) => f === 'document' || f.startsWith('document.')), JSON.stringify(res.body.error.fields)).toBe(true);
+    }
+    for (const who of ['viewer', 'reviewer'] as const) {
+      const res = await team.agents[who].post(`/api/coils/${coil.id}/versions`).send({ message: 'Kept', document: documentOf('Kept strictly') });
+      expect(res.status, who).toBe(403);
+    }
+    expect((await team.agents.viewer.get(`/api/coils/${coil.id}/versions`)).body.versions).toEqual([]);
+    expect((await team.agents.viewer.get(`/api/coils/${coil.id}`)).body.coil.revision).toBe(1);
+  });
+
   describe('compare', () => {
     it('reports added, removed and changed bends and stubs and the key results of both with differences', async () => {
       const coil = await newCoil(team, 'Compared');
