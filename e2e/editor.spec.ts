@@ -212,3 +212,81 @@ test('draw, break, undo, generate, switch units and reload a coil', async ({ pag
   await page.getByTestId('delete-coil-confirm').click();
   await expect(page.getByTestId('coil-open')).toHaveCount(1);
 });
+
+test('a save from a stale revision offers their draft, mine as a version or a comparison, and overwrites nothing', async ({ page, context, baseURL }, testInfo) => {
+  test.setTimeout(120_000);
+  await page.goto('/sign-up');
+  await signUpInUi(page, { name: 'Oren Valdane', email: uniqueEmail(testInfo, 'conflict'), password: PASSWORD });
+  await expect(page.getByTestId('projects-screen')).toBeVisible();
+  const me = await (await page.request.get('/api/me')).json();
+  const created = await page.request.post(`/api/teams/${me.teams[0].id}/projects`, { data: { name: 'Harrow Lane annex' }, headers: { Origin: baseURL! } });
+  const { project } = await created.json();
+  await page.goto(`/projects/${project.id}`);
+  await page.getByTestId('new-coil').click();
+  await page.getByTestId('new-coil-name').fill('Shared coil');
+  await setField(page, 'new-coil-rows', '2');
+  await setField(page, 'new-coil-tubes', '4');
+  await page.getByTestId('new-coil-create').click();
+  await expect(page).toHaveURL(/\/coils\//);
+  await expect(page.getByTestId('circuit-summary')).toHaveText(/4 circuits · 2 passes · counterflow/);
+  const coilId = /\/coils\/([\w-]+)/.exec(page.url())![1];
+
+  // A second tab of the same session opens the coil at the same revision.
+  const other = await context.newPage();
+  await other.goto(page.url());
+  await expect(other.getByTestId('circuit-summary')).toHaveText(/4 circuits · 2 passes · counterflow/);
+
+  // Theirs: the first tab breaks a bend and saves (revision 2).
+  await page.getByTestId('tool-erase').click();
+  await page.getByTestId('face-opposite').click();
+  await tube(page, 1, 1).click();
+  await expect(page.getByTestId('circuit-summary')).toHaveText(/problem/);
+  await expect(page.getByTestId('save-status')).toHaveText('Saved', { timeout: 15_000 });
+
+  // Mine: the second tab marks a crossover; its save from revision 1 is refused and the three ways out are offered.
+  await other.getByTestId('tool-select').click();
+  await other.getByTestId('face-opposite').click();
+  await tube(other, 2, 4).click();
+  await other.getByTestId('toggle-crossover').click();
+  await expect(other.getByTestId('save-conflict')).toBeVisible({ timeout: 15_000 });
+  await expect(other.getByTestId('save-status')).toHaveText('Saved elsewhere');
+  await expect(other.getByTestId('conflict-reload')).toHaveText('Load their draft');
+  await expect(other.getByTestId('conflict-keep-version')).toHaveText('Keep mine as a version');
+  await expect(other.getByTestId('conflict-compare')).toHaveText('Compare');
+  await snap(other, testInfo, '10-conflict');
+
+  await other.getByTestId('conflict-keep-version').click();
+  await expect(other.getByTestId('conflict-kept')).toContainText('Your drawing is saved as version 1');
+  await expect(other.getByTestId('circuit-summary')).toHaveText(/problem/);
+  await expect(other.getByTestId('save-status')).toHaveText('Saved');
+  await snap(other, testInfo, '11-kept');
+
+  const { versions } = await (await page.request.get(`/api/coils/${coilId}/versions`)).json();
+  expect(versions.map((v: { number: number; message: string }) => [v.number, v.message])).toEqual([[1, 'Kept from a conflicting edit (draft revision 1)']]);
+  await expect(other.getByTestId('conflict-kept-link')).toHaveAttribute('href', `/versions/${versions[0].id}`);
+  const kept = (await (await page.request.get(`/api/versions/${versions[0].id}`)).json()).version.document;
+  expect(kept.circuiting.bends.some((b: { crossover?: boolean }) => b.crossover)).toBe(true);
+  const draft = (await (await page.request.get(`/api/coils/${coilId}`)).json()).coil;
+  expect(draft.revision).toBe(2);
+  expect(draft.document.circuiting.bends.some((b: { crossover?: boolean }) => b.crossover)).toBe(false);
+
+  // A second clash, resolved with Compare: both drawings become versions and the comparison opens.
+  await page.getByTestId('undo').click();
+  await expect(page.getByTestId('circuit-summary')).toHaveText(/4 circuits · 2 passes · counterflow/);
+  await expect(page.getByTestId('save-status')).toHaveText('Saved', { timeout: 15_000 });
+  await tube(other, 2, 4).click();
+  await other.getByTestId('toggle-crossover').click();
+  await expect(other.getByTestId('save-conflict')).toBeVisible({ timeout: 15_000 });
+  await other.getByTestId('conflict-compare').click();
+  await expect(other).toHaveURL(/\/compare\/[\w-]+\/[\w-]+/);
+  const after = (await (await page.request.get(`/api/coils/${coilId}/versions`)).json()).versions as { id: string; number: number; message: string }[];
+  expect(after.map((v) => [v.number, v.message])).toEqual([
+    [3, 'Draft at the time of a conflicting edit'],
+    [2, 'Kept from a conflicting edit (draft revision 2)'],
+    [1, 'Kept from a conflicting edit (draft revision 1)'],
+  ]);
+  expect(new URL(other.url()).pathname).toBe(`/compare/${after[1].id}/${after[0].id}`);
+  expect((await (await page.request.get(`/api/coils/${coilId}`)).json()).coil.revision).toBe(3);
+  await snap(other, testInfo, '12-compare');
+  await other.close();
+});

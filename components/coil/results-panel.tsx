@@ -10,6 +10,7 @@ import { useBreakpoint } from '@/components/ui/use-breakpoint';
 import { colors, radius, space, type } from '@/components/ui/theme';
 import { formatNumber, formatQuantity, unitLabel, type QuantityKind, type UnitSystem } from '@/lib/units';
 import type { CircuitResult, ResultWarning, SolveResult, TopologyError, TubeRef } from '@/lib/engine/types';
+import { BillOfMaterialsTable } from './bill-of-materials-table';
 import { TurndownChart } from './turndown-chart';
 import type { LiveSolve } from './use-live-solve';
 
@@ -255,6 +256,11 @@ export function ResultsPanel({
           <Section title="Circuits">
             <CircuitTable circuits={result.circuits} system={system} onSelect={onSelectCircuit} />
           </Section>
+          {result.billOfMaterials ? (
+            <Section title="Bill of materials">
+              <BillOfMaterialsTable bom={result.billOfMaterials} system={system} />
+            </Section>
+          ) : null}
           {result.turndown && result.turndown.length > 1 ? (
             <Section title="Turndown">
               <TurndownChart points={result.turndown} system={system} />
