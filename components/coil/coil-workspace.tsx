@@ -229,7 +229,7 @@ const styles = StyleSheet.create({
   center: { flex: 1, alignItems: 'center', justifyContent: 'center', gap: space.lg, padding: space.xl },
   header: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.surface, borderBottomWidth: 1, borderBottomColor: colors.border },
   titleBlock: { flexGrow: 1, flexShrink: 1, flexBasis: 160, minWidth: 0 },
-  headerActions: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
+  headerActions: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm, flexShrink: 1, maxWidth: '100%' },
   wideBody: { flex: 1, flexDirection: 'row', minHeight: 0 },
   side: { width: 320, borderRightWidth: 1, borderRightColor: colors.border, backgroundColor: colors.surface, minHeight: 0 },
   results: { width: 460, borderRightWidth: 0, borderLeftWidth: 1, borderLeftColor: colors.border, backgroundColor: colors.background },

@@ -3,7 +3,9 @@
  * server (POST /api/solve through react-query): a single edit is sent at once, a burst of edits at most once per
  * 150 ms with the latest drawing (leading and trailing edge). A result is "fresh" only when it belongs
  * to the document version on screen; otherwise it is kept but marked stale. Invalid drawings are not sent: their
- * errors are the answer, never old numbers.
+ * errors are the answer, never old numbers. While drawing, the server skips the part-load solves (`turndown:
+ * false`, about five times faster); once the drawing rests for TURNDOWN_SOLVE_DELAY_MS the full solve follows and,
+ * when it belongs to the same drawing, replaces the quick answer (turndown chart and part-load warnings).
  */
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
@@ -13,6 +15,8 @@ import { traceCircuits, type Topology } from '@/lib/engine/topology';
 import type { Circuiting, CoilDocument, SolveResult, TubeRef } from '@/lib/engine/types';
 
 export const LIVE_SOLVE_DELAY_MS = 150;
+/** Quiet time after the last edit before the part-load (turndown) solve is asked for, ms. */
+export const TURNDOWN_SOLVE_DELAY_MS = 700;
 
 /** Tube references off the grid, worded as the schema words them (lib/schema/coil-document.ts). */
 export function tubeReferenceIssues(c: Circuiting, rows: number, tubesPerRow: number): LiveSolve['documentIssues'] {
@@ -78,7 +82,7 @@ export function useLiveSolve(coilId: string, document: CoilDocument, version: nu
 
   const query = useQuery({
     queryKey: ['solve', coilId, request.version],
-    queryFn: async () => ({ version: request.version, result: await solve(request.document) }),
+    queryFn: async () => ({ version: request.version, result: await solve(request.document, { turndown: false }) }),
     enabled: request.solvable,
     placeholderData: keepPreviousData,
     staleTime: Infinity,
@@ -86,7 +90,23 @@ export function useLiveSolve(coilId: string, document: CoilDocument, version: nu
     retry: 1,
   });
 
-  const data = query.data;
+  const [resting, setResting] = useState({ document, version, solvable });
+  useEffect(() => {
+    const t = setTimeout(() => setResting({ document, version, solvable }), TURNDOWN_SOLVE_DELAY_MS);
+    return () => clearTimeout(t);
+  }, [document, version, solvable]);
+  const full = useQuery({
+    queryKey: ['solve-full', coilId, resting.version],
+    queryFn: async () => ({ version: resting.version, result: await solve(resting.document) }),
+    enabled: resting.solvable,
+    staleTime: Infinity,
+    gcTime: 30_000,
+    retry: 1,
+  });
+
+  const quick = query.data;
+  const complete = full.data !== undefined && quick !== undefined && full.data.version === quick.version ? full.data : undefined;
+  const data = complete ?? quick;
   const fresh = solvable && data !== undefined && data.version === version && !query.isPlaceholderData;
   const result = data?.result ?? null;
   const resultVersion = data?.version ?? null;

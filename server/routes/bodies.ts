@@ -21,4 +21,8 @@ export const draftBody = z.object({
   revision: z.number({ error: 'revision must be the revision the edit started from' }).int().min(1),
 });
 export const renameCoilBody = z.object({ name: coilName });
-export const solveBody = z.object({ document: coilDocumentSchema });
+export const solveBody = z.object({
+  document: coilDocumentSchema,
+  /** Include the part-load (turndown) solves; default true. */
+  turndown: z.boolean({ error: 'turndown must be true or false' }).optional(),
+});

@@ -8,7 +8,8 @@ export function solveRoutes(services: Services): Router {
   // An invalid circuiting is data (valid: false, 200); only a malformed document is a 400.
   r.post('/', (req, res) => {
     signedIn(req);
-    res.json(services.solve(solveBody.parse(req.body).document));
+    const body = solveBody.parse(req.body);
+    res.json(services.solve(body.document, { turndown: body.turndown ?? true }));
   });
   return r;
 }

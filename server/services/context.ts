@@ -5,7 +5,8 @@ import type { Logger } from '@/server/logger';
 import type { Mailer } from '@/server/mail/mailer';
 import type { CoilDocument, SolveResult } from '@/lib/engine/types';
 
-export type SolveFn = (document: CoilDocument) => SolveResult;
+/** The solver; `turndown: false` skips the part-load solves (the editor's quick answer while drawing). */
+export type SolveFn = (document: CoilDocument, settings?: { turndown?: boolean }) => SolveResult;
 
 /** What every use case may touch. No req/res: the routes translate HTTP into these calls. */
 export interface ServiceDeps {
