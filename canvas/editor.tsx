@@ -288,7 +288,7 @@ function TemperatureLegend({ min, max, format }: { min: number; max: number; for
 
 const styles = StyleSheet.create({
   root: { flex: 1, minHeight: 0, backgroundColor: colors.background },
-  viewport: { flex: 1, minHeight: 240, overflow: 'hidden', position: 'relative', backgroundColor: '#FBFAF7', touchAction: 'none', cursor: 'crosshair' } as object,
+  viewport: { flex: 1, minHeight: 120, overflow: 'hidden', position: 'relative', backgroundColor: '#FBFAF7', touchAction: 'none', cursor: 'crosshair' } as object,
   wrapper: { position: 'absolute', left: 0, top: 0, transformOrigin: '0 0' } as object,
   faceTag: { position: 'absolute', right: space.sm, top: space.sm, color: colors.textMuted, backgroundColor: 'rgba(255,255,255,0.85)', paddingHorizontal: space.xs },
   readoutBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', columnGap: space.sm, paddingHorizontal: space.md, paddingVertical: space.xs, backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.border },
