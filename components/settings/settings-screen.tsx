@@ -18,12 +18,12 @@ import { useUnitSystem } from '@/components/ui/use-unit-system';
 
 const UNIT_CHOICES = [
   { value: 'si', label: 'SI', accessibilityLabel: 'SI units: metre, kelvin, pascal, watt' },
-  { value: 'ip', label: 'IP', accessibilityLabel: 'IP units: inch, foot, degree Fahrenheit, psi, Btu/h' },
+  { value: 'ip', label: 'IP', accessibilityLabel: 'IP units: inch, foot, degree Fahrenheit, foot of water, Btu/h' },
 ] as const;
 
 const UNIT_EXAMPLES: Record<UnitSystem, string> = {
   si: 'Water velocity in m/s, pressure drop in kPa, capacity in kW, temperatures in °C.',
-  ip: 'Water velocity in ft/s, pressure drop in ft of water and psi, capacity in Btu/h and MBH, temperatures in °F.',
+  ip: 'Water velocity in ft/s, water pressure drop in ft of water, air pressure drop in in. w.g., capacity in Btu/h and MBH, temperatures in °F.',
 };
 
 function NameForm() {
