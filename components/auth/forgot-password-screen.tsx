@@ -1,6 +1,5 @@
 /** Ask for a password-reset link by e-mail. The server answers the same whether or not the address has an account. */
 import { useMutation } from '@tanstack/react-query';
-import { useState } from 'react';
 import { View } from 'react-native';
 import { requestPasswordReset } from '@/lib/api/auth';
 import { forgotPasswordBodySchema } from '@/lib/schema/api-auth';
@@ -8,17 +7,18 @@ import { AuthLayout } from '@/components/auth/auth-layout';
 import { AuthLink, AuthNote } from '@/components/auth/auth-link';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { fieldErrorsFromApi, messageOf, validate, withoutField, type FieldErrors } from '@/components/ui/form-errors';
+import { fieldErrorsFromApi, messageOf, validate } from '@/components/ui/form-errors';
 import { Stack } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
+import { useFormFields } from '@/components/ui/use-form-fields';
 
 export function ForgotPasswordScreen() {
-  const [email, setEmail] = useState('');
-  const [errors, setErrors] = useState<FieldErrors>({});
+  const form = useFormFields({ email: '' });
+  const { values, errors, setErrors } = form;
   const mutation = useMutation({ mutationFn: requestPasswordReset, onError: (err) => setErrors(fieldErrorsFromApi(err)) });
 
   const submit = () => {
-    const r = validate(forgotPasswordBodySchema, { email });
+    const r = validate(forgotPasswordBodySchema, values);
     setErrors(r.errors ?? {});
     if (r.data) mutation.mutate(r.data);
   };
@@ -29,7 +29,7 @@ export function ForgotPasswordScreen() {
         <Stack>
           {mutation.isSuccess ? (
             <Banner tone="success" title="Check your e-mail" testID="forgot-sent">
-              {`If ${email.trim()} has a Tubeloom account, a reset link is on its way. It expires in one hour.`}
+              {`If ${values.email.trim()} has a Tubeloom account, a reset link is on its way. It expires in one hour.`}
             </Banner>
           ) : null}
           {mutation.error && !errors.email ? (
@@ -39,12 +39,7 @@ export function ForgotPasswordScreen() {
           ) : null}
           <TextField
             label="E-mail"
-            value={email}
-            onChangeText={(t) => {
-              setEmail(t);
-              setErrors((e) => withoutField(e, 'email'));
-            }}
-            error={errors.email}
+            {...form.field('email')}
             autoComplete="email"
             inputMode="email"
             autoCapitalize="none"

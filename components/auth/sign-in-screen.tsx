@@ -1,7 +1,6 @@
 /** Sign in with e-mail and password; wrong credentials get the server's message above the form. */
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'expo-router';
-import { useState } from 'react';
 import { View } from 'react-native';
 import { signIn } from '@/lib/api/auth';
 import { ME_QUERY_KEY } from '@/lib/api/me';
@@ -11,16 +10,16 @@ import { AuthLink, AuthNote } from '@/components/auth/auth-link';
 import { safeNext } from '@/components/auth/safe-next';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { fieldErrorsFromApi, messageOf, validate, withoutField, type FieldErrors } from '@/components/ui/form-errors';
+import { fieldErrorsFromApi, messageOf, validate } from '@/components/ui/form-errors';
 import { Stack } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
+import { useFormFields } from '@/components/ui/use-form-fields';
 
 export function SignInScreen({ next }: { next?: string }) {
   const router = useRouter();
   const queryClient = useQueryClient();
-  const [email, setEmail] = useState('');
-  const [password, setPassword] = useState('');
-  const [errors, setErrors] = useState<FieldErrors>({});
+  const form = useFormFields({ email: '', password: '' });
+  const { setErrors } = form;
   const mutation = useMutation({
     mutationFn: signIn,
     onSuccess: async () => {
@@ -32,7 +31,7 @@ export function SignInScreen({ next }: { next?: string }) {
   });
 
   const submit = () => {
-    const r = validate(signInBodySchema, { email, password });
+    const r = validate(signInBodySchema, form.values);
     setErrors(r.errors ?? {});
     if (r.data) mutation.mutate(r.data);
   };
@@ -51,12 +50,7 @@ export function SignInScreen({ next }: { next?: string }) {
           ) : null}
           <TextField
             label="E-mail"
-            value={email}
-            onChangeText={(t) => {
-              setEmail(t);
-              setErrors((e) => withoutField(e, 'email'));
-            }}
-            error={errors.email}
+            {...form.field('email')}
             autoComplete="email"
             inputMode="email"
             autoCapitalize="none"
@@ -65,12 +59,7 @@ export function SignInScreen({ next }: { next?: string }) {
           />
           <TextField
             label="Password"
-            value={password}
-            onChangeText={(t) => {
-              setPassword(t);
-              setErrors((e) => withoutField(e, 'password'));
-            }}
-            error={errors.password}
+            {...form.field('password')}
             secureTextEntry
             autoComplete="current-password"
             testID="sign-in-password"

@@ -1,7 +1,6 @@
 /** Create an account (which also creates the user's own team, as its owner). */
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'expo-router';
-import { useState } from 'react';
 import { View } from 'react-native';
 import { signUp } from '@/lib/api/auth';
 import { ME_QUERY_KEY } from '@/lib/api/me';
@@ -11,17 +10,16 @@ import { AuthLink, AuthNote } from '@/components/auth/auth-link';
 import { safeNext } from '@/components/auth/safe-next';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { fieldErrorsFromApi, messageOf, validate, withoutField, type FieldErrors } from '@/components/ui/form-errors';
+import { fieldErrorsFromApi, messageOf, validate } from '@/components/ui/form-errors';
 import { Stack } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
+import { useFormFields } from '@/components/ui/use-form-fields';
 
 export function SignUpScreen({ next }: { next?: string }) {
   const router = useRouter();
   const queryClient = useQueryClient();
-  const [name, setName] = useState('');
-  const [email, setEmail] = useState('');
-  const [password, setPassword] = useState('');
-  const [errors, setErrors] = useState<FieldErrors>({});
+  const form = useFormFields({ name: '', email: '', password: '' });
+  const { setErrors } = form;
   const mutation = useMutation({
     mutationFn: signUp,
     onSuccess: async () => {
@@ -33,7 +31,7 @@ export function SignUpScreen({ next }: { next?: string }) {
   });
 
   const submit = () => {
-    const r = validate(signUpBodySchema, { name, email, password });
+    const r = validate(signUpBodySchema, form.values);
     setErrors(r.errors ?? {});
     if (r.data) mutation.mutate(r.data);
   };
@@ -52,23 +50,13 @@ export function SignUpScreen({ next }: { next?: string }) {
           ) : null}
           <TextField
             label="Your name"
-            value={name}
-            onChangeText={(t) => {
-              setName(t);
-              setErrors((e) => withoutField(e, 'name'));
-            }}
-            error={errors.name}
+            {...form.field('name')}
             autoComplete="name"
             testID="sign-up-name"
           />
           <TextField
             label="E-mail"
-            value={email}
-            onChangeText={(t) => {
-              setEmail(t);
-              setErrors((e) => withoutField(e, 'email'));
-            }}
-            error={errors.email}
+            {...form.field('email')}
             autoComplete="email"
             inputMode="email"
             autoCapitalize="none"
@@ -76,12 +64,7 @@ export function SignUpScreen({ next }: { next?: string }) {
           />
           <TextField
             label="Password"
-            value={password}
-            onChangeText={(t) => {
-              setPassword(t);
-              setErrors((e) => withoutField(e, 'password'));
-            }}
-            error={errors.password}
+            {...form.field('password')}
             hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
             secureTextEntry
             autoComplete="new-password"

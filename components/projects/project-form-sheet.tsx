@@ -3,7 +3,7 @@
  * each message (its own or the server's `fields`) beside the field it is about.
  */
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { useEffect, useState } from 'react';
+import { useEffect } from 'react';
 import { createProject, updateProject } from '@/lib/api/projects';
 import {
   createProjectBodySchema,
@@ -16,6 +16,7 @@ import { Button } from '@/components/ui/button';
 import { fieldErrorsFromApi, messageOf, validate, type FieldErrors } from '@/components/ui/form-errors';
 import { Sheet } from '@/components/ui/sheet';
 import { TextField } from '@/components/ui/text-field';
+import { useFormFields } from '@/components/ui/use-form-fields';
 
 interface Values {
   name: string;
@@ -47,8 +48,8 @@ export function ProjectFormSheet({
 }) {
   const queryClient = useQueryClient();
   const editing = Boolean(project);
-  const [values, setValues] = useState<Values>(valuesOf(project));
-  const [errors, setErrors] = useState<FieldErrors>({});
+  const form = useFormFields<Values>(valuesOf(project));
+  const { values, setValues, setErrors } = form;
 
   const mutation = useMutation({
     mutationFn: async (v: Values) => {
@@ -81,11 +82,6 @@ export function ProjectFormSheet({
     // eslint-disable-next-line react-hooks/exhaustive-deps -- reset only when the sheet opens
   }, [open]);
 
-  // Editing a field clears its message; the rest stay until the next try.
-  const set = (key: keyof Values) => (text: string) => {
-    setValues((v) => ({ ...v, [key]: text }));
-    setErrors(({ [key]: _cleared, ...rest }) => rest);
-  };
   const submit = () => {
     const r = validate(editing ? updateProjectBodySchema : createProjectBodySchema, values);
     setErrors(r.errors ?? {});
@@ -119,28 +115,22 @@ export function ProjectFormSheet({
           {formError}
         </Banner>
       ) : null}
-      <TextField label="Project name" value={values.name} onChangeText={set('name')} error={errors.name} testID="project-name" autoFocus />
+      <TextField label="Project name" {...form.field('name')} testID="project-name" autoFocus />
       <TextField
         label="Client"
-        value={values.client}
-        onChangeText={set('client')}
-        error={errors.client}
+        {...form.field('client')}
         hint="Optional. Who the coils are for."
         testID="project-client"
       />
       <TextField
         label="Site"
-        value={values.site}
-        onChangeText={set('site')}
-        error={errors.site}
+        {...form.field('site')}
         hint="Optional. Building or plant where the coils go."
         testID="project-site"
       />
       <TextField
         label="Notes"
-        value={values.notes}
-        onChangeText={set('notes')}
-        error={errors.notes}
+        {...form.field('notes')}
         hint={`Optional. Up to ${PROJECT_NOTES_MAX} characters.`}
         multiline
         testID="project-notes"
