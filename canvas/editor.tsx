@@ -2,7 +2,7 @@
  * The circuit editor: toolbar, the tube sheet in a pan/zoom viewport, the temperature legend and the tube read-out.
  * Results come in as props (the workspace fetches them); the editor only draws and dispatches commands.
  */
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { memo, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { Platform, Pressable, StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { colors, space, type } from '@/components/ui/theme';
 import { Sheet } from '@/components/ui/sheet';
@@ -133,6 +133,28 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
     [store],
   );
   const showTemperature = temperatureOn && drawing.temperatureRange !== null;
+  // Stable props for the viewport and its wrapper, so an edit does not make react-native-web re-resolve them.
+  const pointerHandlers = useMemo(
+    () =>
+      ({
+        onPointerDown: gestures.onPointerDown,
+        onPointerMove: gestures.onPointerMove,
+        onPointerUp: gestures.onPointerUp,
+        onPointerCancel: gestures.onPointerCancel,
+        onPointerLeave: () => view.getState().setHover(null),
+      }) as object,
+    [gestures, view],
+  );
+  const wrapperStyle = useMemo(() => [styles.wrapper, { transform: [{ translateX: panX }, { translateY: panY }, { scale: zoom }] }], [panX, panY, zoom]);
+  const readout = useMemo(() => readoutText(infoTube, session.tool === 'select' ? readoutBend : null, session.selection?.kind === 'bend', drawing, temperatures, formatTemperature), [
+    infoTube,
+    session.tool,
+    readoutBend,
+    session.selection,
+    drawing,
+    temperatures,
+    formatTemperature,
+  ]);
 
   return (
     <View style={styles.root} testID="circuit-editor">
@@ -157,15 +179,9 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
         style={styles.viewport}
         onLayout={onLayout}
         testID="sheet-viewport"
-        {...({
-          onPointerDown: gestures.onPointerDown,
-          onPointerMove: gestures.onPointerMove,
-          onPointerUp: gestures.onPointerUp,
-          onPointerCancel: gestures.onPointerCancel,
-          onPointerLeave: () => view.getState().setHover(null),
-        } as object)}
+        {...pointerHandlers}
       >
-        <View style={[styles.wrapper, { transform: [{ translateX: panX }, { translateY: panY }, { scale: zoom }] }]}>
+        <View style={wrapperStyle}>
           <TubeSheet layout={layout} drawing={drawing} pendingTube={session.pendingTube} hover={hover} dragFrom={dragFrom} dragTo={dragTo} />
         </View>
         <Text style={[type.caption, styles.faceTag]} pointerEvents="none" testID="face-shown">
@@ -175,15 +191,7 @@ export function CircuitEditor({ store, topology, result, formatTemperature, keyb
           <TemperatureLegend min={drawing.temperatureRange.min} max={drawing.temperatureRange.max} format={formatTemperature} />
         ) : null}
       </View>
-      <TubeReadout
-        tube={infoTube}
-        bend={session.tool === 'select' ? readoutBend : null}
-        bendPicked={session.selection?.kind === 'bend'}
-        drawing={drawing}
-        temperatures={temperatures}
-        format={formatTemperature}
-        onCrossover={onCrossover}
-      />
+      <TubeReadout text={readout.text} detailed={readout.detailed} bend={session.tool === 'select' ? readoutBend : null} onCrossover={onCrossover} />
       {keyboard ? (
         <Sheet open={helpOpen} title="Keyboard shortcuts" onClose={() => setHelpOpen(false)} testID="shortcuts-sheet">
           {shortcutTable.map((s) => (
@@ -217,25 +225,15 @@ function selectedBend(selection: Selection, bends: Bend[], face: EndFace): BendR
 const sameRef = (x: TubeRef, y: TubeRef) => x.row === y.row && x.tube === y.tube;
 const sameTubeEnds = (b: Bend, a: TubeRef, c: TubeRef) => (sameRef(b.a, a) && sameRef(b.b, c)) || (sameRef(b.a, c) && sameRef(b.b, a));
 
-function TubeReadout({
-  tube,
-  bend,
-  bendPicked,
-  drawing,
-  temperatures,
-  format,
-  onCrossover,
-}: {
-  tube: TubeRef | null;
-  /** A bend to offer the crossover mark for (Select tool), or null. */
-  bend: BendRef | null;
-  /** True when the bend itself was picked (not reached through a tube). */
-  bendPicked: boolean;
-  drawing: ReturnType<typeof buildDrawing>;
-  temperatures: ReturnType<typeof tubeTemperatures>;
-  format: (c: number) => string;
-  onCrossover: (bend: BendRef, crossover: boolean) => void;
-}) {
+/** The read-out line: the tube's circuit, pass and water temperatures, or the picked bend, or a hint. */
+function readoutText(
+  tube: TubeRef | null,
+  bend: BendRef | null,
+  bendPicked: boolean,
+  drawing: ReturnType<typeof buildDrawing>,
+  temperatures: ReturnType<typeof tubeTemperatures>,
+  format: (c: number) => string,
+): { text: string; detailed: boolean } {
   const parts: string[] = [];
   if (tube) {
     const key = tubeKey(tube);
@@ -248,9 +246,26 @@ function TubeReadout({
     parts.push(`Bend ${tubeWords(bend.a)} to ${tubeWords(bend.b)}, ${endWords[bend.end]}${bend.crossover ? ', crossover' : ''}`);
   }
   const text = parts.length > 0 ? parts.join(' · ') : 'Tap a tube with Select to see its circuit and water temperatures; tap a bend to mark it as a crossover.';
+  return { text, detailed: parts.length > 0 };
+}
+
+/** Memoised on the text: most edits leave the read-out as it was. */
+const TubeReadout = memo(function TubeReadout({
+  text,
+  detailed,
+  bend,
+  onCrossover,
+}: {
+  text: string;
+  /** True when the text describes a tube or bend (not the hint). */
+  detailed: boolean;
+  /** A bend to offer the crossover mark for (Select tool), or null. */
+  bend: BendRef | null;
+  onCrossover: (bend: BendRef, crossover: boolean) => void;
+}) {
   return (
     <View style={styles.readoutBar}>
-      <Text style={[parts.length > 0 ? type.small : type.caption, styles.readout]} testID="tube-readout" accessibilityLiveRegion="polite">
+      <Text style={[detailed ? type.small : type.caption, styles.readout]} testID="tube-readout" accessibilityLiveRegion="polite">
         {text}
       </Text>
       {bend ? (
@@ -266,7 +281,7 @@ function TubeReadout({
       ) : null}
     </View>
   );
-}
+});
 
 function TemperatureLegend({ min, max, format }: { min: number; max: number; format: (c: number) => string }) {
   const steps = 10;

@@ -1,10 +1,11 @@
 /** The editor's toolbar: drawing tools, the end face shown, undo/redo, fit, temperature colours and help. */
-import { memo } from 'react';
+import { memo, useMemo } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '@/components/ui/theme';
 import type { FaceShown, Tool } from './session';
 
-function ToolButton({ label, hint, active = false, disabled = false, compact = false, onPress, testID }: { label: string; hint: string; active?: boolean; disabled?: boolean; compact?: boolean; onPress: () => void; testID: string }) {
+/** Memoised, with stable handlers: an edit flips Undo and Redo, and only those buttons re-render. */
+const ToolButton = memo(function ToolButton({ label, hint, active = false, disabled = false, compact = false, onPress, testID }: { label: string; hint: string; active?: boolean; disabled?: boolean; compact?: boolean; onPress: () => void; testID: string }) {
   return (
     <Pressable
       role="button"
@@ -21,7 +22,7 @@ function ToolButton({ label, hint, active = false, disabled = false, compact = f
       </Text>
     </Pressable>
   );
-}
+});
 
 const tools: { tool: Tool; label: string; hint: string }[] = [
   { tool: 'bend', label: 'Bend', hint: 'Bend tool: tap two tubes or drag from one to the other (B)' },
@@ -57,16 +58,19 @@ export interface ToolbarProps {
 
 export const EditorToolbar = memo(function EditorToolbar(p: ToolbarProps) {
   const c = p.compact ?? false;
+  const { onTool, onFace } = p;
+  const onToolPress = useMemo(() => new Map(tools.map((t) => [t.tool, () => onTool(t.tool)])), [onTool]);
+  const onFacePress = useMemo(() => new Map(faces.map((f) => [f.face, () => onFace(f.face)])), [onFace]);
   return (
     <View style={[styles.bar, c && styles.barCompact]} accessibilityLabel="Editor tools" testID="editor-toolbar">
       <View style={styles.group} role="toolbar" accessibilityLabel="Drawing tools">
         {tools.map((t) => (
-          <ToolButton key={t.tool} compact={c} label={t.label} hint={t.hint} active={p.tool === t.tool} onPress={() => p.onTool(t.tool)} testID={`tool-${t.tool}`} />
+          <ToolButton key={t.tool} compact={c} label={t.label} hint={t.hint} active={p.tool === t.tool} onPress={onToolPress.get(t.tool)!} testID={`tool-${t.tool}`} />
         ))}
       </View>
       <View style={styles.group} role="toolbar" accessibilityLabel="End face shown">
         {faces.map((f) => (
-          <ToolButton key={f.face} compact={c} label={c ? f.short : f.label} hint={f.hint} active={p.face === f.face} onPress={() => p.onFace(f.face)} testID={`face-${f.face}`} />
+          <ToolButton key={f.face} compact={c} label={c ? f.short : f.label} hint={f.hint} active={p.face === f.face} onPress={onFacePress.get(f.face)!} testID={`face-${f.face}`} />
         ))}
       </View>
       <View style={styles.group}>
