@@ -6,8 +6,7 @@ import { memo, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { Platform, Pressable, StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { colors, space, type } from '@/components/ui/theme';
 import { Sheet } from '@/components/ui/sheet';
-import type { Bend, EndFace, SolveResult, TubeRef } from '@/lib/engine/types';
-import type { Topology } from '@/lib/engine/topology';
+import type { Bend, CoilDocument, EndFace, SolveResult, TubeRef } from '@/lib/engine/types';
 import { sheetAnalysis, tubeTemperatures } from './analysis';
 import { viridis } from './colormap';
 import { buildDrawing, buildSheetLayout, tubeKey } from './render-model';
@@ -18,22 +17,30 @@ import { EditorToolbar } from './toolbar';
 import { PX_PER_MM, TubeSheet } from './tube-sheet';
 import { useEditor, useView } from './use-editor';
 import { useSheetGestures } from './use-sheet-gestures';
+import { traceOf } from './trace-cache';
 import { createViewStore, fitView } from './view-store';
 
 export interface CircuitEditorProps {
   store: EditorStore;
-  topology: Topology;
-  /** The solve result of the drawing as it is now, or null (none yet, stale, or invalid). */
+  /** A solve result, or null (none yet, stale, or invalid). */
   result: SolveResult | null;
+  /**
+   * The document `result` was solved for. The editor draws the store's document at once, ahead of the workspace
+   * (which follows in a deferred render), so it shows `result` only while that is the document on screen.
+   */
+  resultDocument: CoilDocument | null;
   formatTemperature: (celsius: number) => string;
   /** Keyboard shortcuts are offered on wide screens. */
   keyboard: boolean;
 }
 
-export function CircuitEditor({ store, topology, result, formatTemperature, keyboard }: CircuitEditorProps) {
+export function CircuitEditor({ store, result: resultGiven, resultDocument, formatTemperature, keyboard }: CircuitEditorProps) {
   const view = useMemo(() => createViewStore(), []);
-  const geometry = useEditor(store, (s) => s.document.geometry);
-  const circuiting = useEditor(store, (s) => s.document.circuiting);
+  const document = useEditor(store, (s) => s.document);
+  const { geometry, circuiting } = document;
+  // The trace is cached per document, so the live solve reuses it when the workspace catches up.
+  const topology = traceOf(document);
+  const result = resultDocument === document ? resultGiven : null;
   const session = useEditor(store, (s) => s.session);
   const canUndo = useEditor(store, (s) => s.past.length > 0);
   const canRedo = useEditor(store, (s) => s.future.length > 0);

@@ -3,7 +3,7 @@
  * editor in the middle with forms on the left and results on the right; phones give the editor the screen and
  * put forms and results under tabs. The draft autosaves; results follow every change.
  */
-import { useCallback, useMemo, useState, type ReactNode } from 'react';
+import { useCallback, useDeferredValue, useMemo, useState, type ReactNode } from 'react';
 import { ActivityIndicator, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'expo-router';
@@ -71,8 +71,10 @@ type FormTab = 'geometry' | 'conditions';
 function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: ReactNode }) {
   const [store] = useState<EditorStore>(() => createEditorStore(coil.document));
   const autosave = useAutosave(coil.id, store, coil.revision);
-  const document = useEditor(store, (s) => s.document);
-  const version = useEditor(store, (s) => s.documentVersion);
+  // Deferred: the editor subscribes to the store itself and draws an edit at once; the forms, results and live
+  // solve follow in a deferred render, so they never hold up the sheet.
+  const document = useDeferredValue(useEditor(store, (s) => s.document));
+  const version = useDeferredValue(useEditor(store, (s) => s.documentVersion));
   const live = useLiveSolve(coil.id, document, version);
   const { unitSystem, setUnitSystem } = useUnitSystem();
   const { isWide } = useBreakpoint();
@@ -99,9 +101,13 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
 
   // Elements kept between renders: an edit re-renders the workspace, and React skips children whose element is
   // the same object (the forms subscribe to their own part of the document).
+  // The editor is told which document the result belongs to: it may already show a newer one.
+  const resultDocument = live.fresh ? document : null;
   const editor = useMemo(
-    () => <CircuitEditor store={store} topology={live.topology} result={live.fresh ? live.result : null} formatTemperature={formatTemperature} keyboard={isWide} />,
-    [store, live.topology, live.fresh, live.result, formatTemperature, isWide],
+    () => (
+      <CircuitEditor store={store} result={live.fresh ? live.result : null} resultDocument={resultDocument} formatTemperature={formatTemperature} keyboard={isWide} />
+    ),
+    [store, live.fresh, live.result, resultDocument, formatTemperature, isWide],
   );
   const results = useMemo(
     () => (
@@ -123,8 +129,11 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
   const conditionsForm = useMemo(() => <ConditionsForm store={store} system={unitSystem} fieldErrors={fieldErrors} />, [store, unitSystem, fieldErrors]);
   const summary = useMemo(() => <CircuitSummary topology={live.topology} />, [live.topology]);
 
-  const header = (
-    <View style={styles.header}>
+  // The parts of the layout are memoised too: an edit or a save-state change re-renders the workspace at once (the
+  // store and the autosave state are read here), and only what depends on them should follow.
+  const saveBlocked = autosave.state !== 'saved';
+  const title = useMemo(
+    () => (
       <View style={styles.titleBlock}>
         <Link href={`/projects/${coil.projectId}`} style={[type.caption, { color: colors.primary }]} testID="back-to-project">
           ‹ Project
@@ -133,7 +142,11 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
           {document.name}
         </Text>
       </View>
-      <SaveStatus autosave={autosave} />
+    ),
+    [coil.projectId, isWide, document.name],
+  );
+  const headerActions = useMemo(
+    () => (
       <View style={styles.headerActions}>
         <SegmentedControl<UnitSystem>
           label="Units"
@@ -148,21 +161,31 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
         <Button size="sm" variant="secondary" label="Standard circuiting" onPress={() => setGeneratorOpen(true)} testID="open-generator" />
         <VersionLink projectId={coil.projectId} coilId={coil.id} />
         {/* A version is cut from the server's draft: wait until every edit is saved. */}
-        <SaveVersionButton coilId={coil.id} disabled={autosave.state !== 'saved'} />
+        <SaveVersionButton coilId={coil.id} disabled={saveBlocked} />
       </View>
+    ),
+    [unitSystem, setUnitSystem, coil.projectId, coil.id, saveBlocked],
+  );
+  const header = (
+    <View style={styles.header}>
+      {title}
+      <SaveStatus autosave={autosave} />
+      {headerActions}
     </View>
   );
 
-  const generator = (
-    <Sheet open={generatorOpen} title="Standard circuiting" onClose={() => setGeneratorOpen(false)} testID="generator-sheet">
-      {generatorOpen ? <GeneratorPanel store={store} system={unitSystem} onApplied={() => setGeneratorOpen(false)} /> : null}
-    </Sheet>
+  const generator = useMemo(
+    () => (
+      <Sheet open={generatorOpen} title="Standard circuiting" onClose={() => setGeneratorOpen(false)} testID="generator-sheet">
+        {generatorOpen ? <GeneratorPanel store={store} system={unitSystem} onApplied={() => setGeneratorOpen(false)} /> : null}
+      </Sheet>
+    ),
+    [generatorOpen, store, unitSystem],
   );
 
-  if (isWide) {
-    return (
-      <View style={styles.root} testID="coil-workspace">
-        {header}
+  const wideBody = useMemo(
+    () =>
+      isWide ? (
         <View style={styles.wideBody}>
           <View style={styles.side}>
             <View style={styles.sideTabs}>
@@ -189,36 +212,44 @@ function LoadedWorkspace({ coil, extraPanels }: { coil: Coil; extraPanels?: Reac
             <ScrollView contentContainerStyle={styles.sideContent}>{results}</ScrollView>
           </View>
         </View>
-        {generator}
-      </View>
-    );
-  }
+      ) : null,
+    [isWide, formTab, geometryForm, conditionsForm, editor, summary, results],
+  );
+  const phoneBody = useMemo(
+    () =>
+      isWide ? null : (
+        <>
+          <View style={styles.phoneTabs}>
+            <SegmentedControl<PhoneTab>
+              label="Workspace section"
+              value={phoneTab}
+              options={[
+                { value: 'sheet', label: 'Sheet' },
+                { value: 'geometry', label: 'Geometry' },
+                { value: 'conditions', label: 'Conditions' },
+                { value: 'results', label: 'Results' },
+              ]}
+              onChange={setPhoneTab}
+              testID="phone-tabs"
+            />
+          </View>
+          {summary}
+          {phoneTab === 'sheet' ? (
+            <View style={styles.phoneEditor}>{editor}</View>
+          ) : (
+            <ScrollView style={styles.phoneScroll} contentContainerStyle={styles.sideContent} keyboardShouldPersistTaps="handled">
+              {phoneTab === 'geometry' ? geometryForm : phoneTab === 'conditions' ? conditionsForm : results}
+            </ScrollView>
+          )}
+        </>
+      ),
+    [isWide, phoneTab, summary, editor, geometryForm, conditionsForm, results],
+  );
 
   return (
     <View style={styles.root} testID="coil-workspace">
       {header}
-      <View style={styles.phoneTabs}>
-        <SegmentedControl<PhoneTab>
-          label="Workspace section"
-          value={phoneTab}
-          options={[
-            { value: 'sheet', label: 'Sheet' },
-            { value: 'geometry', label: 'Geometry' },
-            { value: 'conditions', label: 'Conditions' },
-            { value: 'results', label: 'Results' },
-          ]}
-          onChange={setPhoneTab}
-          testID="phone-tabs"
-        />
-      </View>
-      {summary}
-      {phoneTab === 'sheet' ? (
-        <View style={styles.phoneEditor}>{editor}</View>
-      ) : (
-        <ScrollView style={styles.phoneScroll} contentContainerStyle={styles.sideContent} keyboardShouldPersistTaps="handled">
-          {phoneTab === 'geometry' ? geometryForm : phoneTab === 'conditions' ? conditionsForm : results}
-        </ScrollView>
-      )}
+      {isWide ? wideBody : phoneBody}
       {generator}
     </View>
   );

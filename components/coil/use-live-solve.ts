@@ -11,7 +11,8 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { solve } from '@/lib/api/solve';
 import { coilDocumentSchema } from '@/lib/schema/coil-document';
-import { traceCircuits, type Topology } from '@/lib/engine/topology';
+import { traceOf } from '@/canvas/trace-cache';
+import type { Topology } from '@/lib/engine/topology';
 import type { Circuiting, CoilDocument, SolveResult, TubeRef } from '@/lib/engine/types';
 
 export const LIVE_SOLVE_DELAY_MS = 150;
@@ -52,7 +53,7 @@ export interface LiveSolve {
 }
 
 export function useLiveSolve(coilId: string, document: CoilDocument, version: number): LiveSolve {
-  const topology = useMemo(() => traceCircuits(document), [document]);
+  const topology = traceOf(document); // shared with the editor, which traced this document first
   // The schema check of the whole document walks every bend; an edit of the drawing re-checks only what it can
   // break (tube references on the grid: the commands build well-formed bends and stubs), the rest when it changes.
   const { schemaVersion, name, geometry, conditions, options, circuiting } = document;
