@@ -12,11 +12,11 @@
 import { spawnSync } from 'node:child_process';
 import { traceCircuits } from '@/lib/engine/topology';
 import { areNeighbours, deriveGeometry } from '@/lib/engine/geometry';
-import { serpentineCircuiting } from '@/lib/engine/generators';
+import { circuitingFromPaths, serpentineCircuiting } from '@/lib/engine/generators';
 import { solveCoilHydraulics, isothermalTemperatures } from '@/lib/engine/coil-hydraulics';
 import { cachedFluidProperties, solveCoil } from '@/lib/engine/solve-coil';
 import { solveCoilThermal } from '@/lib/engine/thermal';
-import type { Bend, Circuiting, CoilDocument, EndFace, Geometry, Stub, TubeRef } from '@/lib/engine/types';
+import type { CoilDocument, Geometry } from '@/lib/engine/types';
 
 interface Timing {
   name: string;
@@ -76,23 +76,6 @@ function chilledWaterCoil(rows: number, tubesPerRow: number, feeds: number, segm
     },
     options: { segmentsPerTube },
   };
-}
-
-/** Circuiting from tube lists in water order: supply on the connection end, faces alternating. */
-function circuitingFromPaths(paths: TubeRef[][]): Circuiting {
-  const bends: Bend[] = [];
-  const supply: Stub[] = [];
-  const ret: Stub[] = [];
-  for (const tubes of paths) {
-    let face: EndFace = 'connection';
-    supply.push({ end: face, tube: tubes[0] });
-    for (let k = 0; k + 1 < tubes.length; k++) {
-      face = face === 'connection' ? 'opposite' : 'connection';
-      bends.push({ end: face, a: tubes[k], b: tubes[k + 1] });
-    }
-    ret.push({ end: face === 'connection' ? 'opposite' : 'connection', tube: tubes[tubes.length - 1] });
-  }
-  return { bends, supply, return: ret };
 }
 
 /**

@@ -151,3 +151,24 @@ export function candidateFeedCounts(geometry: Pick<Geometry, 'rows' | 'tubesPerR
   }
   return out;
 }
+
+/**
+ * Circuiting from tube lists in water order: each list is one circuit whose supply stub is on the connection end,
+ * with bends on alternating faces and the return stub on the face where the water leaves the last tube
+ * (ENGINEERING.md 2.1, T2-T3). Used to build test and benchmark coils from explicit paths.
+ */
+export function circuitingFromPaths(paths: TubeRef[][]): Circuiting {
+  const bends: Bend[] = [];
+  const supply: Stub[] = [];
+  const ret: Stub[] = [];
+  for (const tubes of paths) {
+    let face: EndFace = 'connection';
+    supply.push({ end: face, tube: tubes[0] });
+    for (let k = 0; k + 1 < tubes.length; k++) {
+      face = face === 'connection' ? 'opposite' : 'connection';
+      bends.push({ end: face, a: tubes[k], b: tubes[k + 1] });
+    }
+    ret.push({ end: face === 'connection' ? 'opposite' : 'connection', tube: tubes[tubes.length - 1] });
+  }
+  return { bends, supply, return: ret };
+}
